@@ -3,7 +3,7 @@ using BenchRunner.Core.Quantities;
 namespace BenchRunner.Core.RfMath;
 
 /// <summary>
-/// Thermal (Johnson–Nyquist) noise available from a matched resistor: N = k·T·B watts, so
+/// Thermal noise available from a matched resistor: N = k·T·B watts, so
 /// N[dBm] = 10·log10(k·T / 1 mW) + 10·log10(B / 1 Hz); about −174 dBm/Hz at 290 K.
 /// A receiver with noise figure NF shows a floor of kTB + NF (in dB).
 /// </summary>
