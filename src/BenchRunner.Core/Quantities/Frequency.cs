@@ -36,7 +36,7 @@ public readonly struct Frequency : IEquatable<Frequency>, IComparable<Frequency>
             throw new ArgumentOutOfRangeException(nameof(hertz), hertz, "A frequency must be finite and not negative.");
         }
 
-        return new Frequency(hertz);
+        return new Frequency(hertz + 0.0);
     }
 
     /// <summary>Creates a frequency from kilohertz.</summary>
@@ -78,7 +78,13 @@ public readonly struct Frequency : IEquatable<Frequency>, IComparable<Frequency>
             return ParseResult<Frequency>.Fail($"\"{text!.Trim()}\" is negative; a frequency must not be negative");
         }
 
-        return ParseResult<Frequency>.Ok(new Frequency(hertz));
+        if (!double.IsFinite(hertz))
+        {
+            return ParseResult<Frequency>.Fail($"\"{text!.Trim()}\" is too large for a frequency");
+        }
+
+        // Adding zero turns "-0 MHz" (-0.0) into +0.0, so that it formats as "0 Hz".
+        return ParseResult<Frequency>.Ok(new Frequency(hertz + 0.0));
     }
 
     /// <summary>Formats with the largest fitting prefix, e.g. <c>137.5 MHz</c>.</summary>

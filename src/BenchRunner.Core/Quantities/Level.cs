@@ -66,7 +66,7 @@ public readonly struct Level : IEquatable<Level>, IComparable<Level>
     public Ratio RelativeTo(Level reference) => Ratio.FromDecibels(Dbm - reference.Dbm);
 
     /// <summary>Formats as e.g. <c>-20 dBm</c>.</summary>
-    public override string ToString() => $"{Math.Round(Dbm, 6).ToString("0.######", CultureInfo.InvariantCulture)} dBm";
+    public override string ToString() => $"{QuantityText.RoundForDisplay(Dbm, 6).ToString("0.######", CultureInfo.InvariantCulture)} dBm";
 
     /// <inheritdoc/>
     public bool Equals(Level other) => Dbm.Equals(other.Dbm);

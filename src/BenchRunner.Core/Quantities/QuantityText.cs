@@ -60,7 +60,8 @@ internal static class QuantityText
     {
         if (value == 0 || !double.IsFinite(value))
         {
-            return $"{value.ToString(CultureInfo.InvariantCulture)} {baseUnit}";
+            // Adding zero turns -0.0 into +0.0, which would otherwise print as "-0".
+            return $"{(value + 0.0).ToString(CultureInfo.InvariantCulture)} {baseUnit}";
         }
 
         var magnitude = Math.Abs(value);
@@ -75,9 +76,17 @@ internal static class QuantityText
         }
 
         var scaled = value / chosen.Scale;
-        var rounded = Math.Round(scaled, Math.Max(0, significant - 1 - (int)Math.Floor(Math.Log10(Math.Abs(scaled)))));
-        return $"{rounded.ToString("0.#########", CultureInfo.InvariantCulture)} {chosen.Prefix}{baseUnit}";
+        // Math.Round accepts at most 15 decimals; more are only asked for below the smallest prefix.
+        var decimals = Math.Clamp(significant - 1 - (int)Math.Floor(Math.Log10(Math.Abs(scaled))), 0, 15);
+        var rounded = RoundForDisplay(scaled, decimals);
+        return $"{rounded.ToString("0.###############", CultureInfo.InvariantCulture)} {chosen.Prefix}{baseUnit}";
     }
+
+    /// <summary>
+    /// Rounds to <paramref name="decimals"/> places (0 to 15) and turns a negative zero into
+    /// zero, so that a tiny negative value prints as "0", not "-0".
+    /// </summary>
+    public static double RoundForDisplay(double value, int decimals) => Math.Round(value, decimals) + 0.0;
 
     /// <summary>Formats a number in the invariant culture with round-trip precision.</summary>
     public static string Invariant(double value) => value.ToString("R", CultureInfo.InvariantCulture);

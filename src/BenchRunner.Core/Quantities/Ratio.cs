@@ -54,7 +54,7 @@ public readonly struct Ratio : IEquatable<Ratio>, IComparable<Ratio>
     }
 
     /// <summary>Formats as e.g. <c>3 dB</c>.</summary>
-    public override string ToString() => $"{Math.Round(Decibels, 6).ToString("0.######", CultureInfo.InvariantCulture)} dB";
+    public override string ToString() => $"{QuantityText.RoundForDisplay(Decibels, 6).ToString("0.######", CultureInfo.InvariantCulture)} dB";
 
     /// <inheritdoc/>
     public bool Equals(Ratio other) => Decibels.Equals(other.Decibels);
