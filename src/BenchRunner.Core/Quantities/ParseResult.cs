@@ -11,29 +11,32 @@ namespace BenchRunner.Core.Quantities;
 public readonly struct ParseResult<T>
 {
     private readonly T? _value;
+    private readonly string? _error;
+    private readonly bool _success;
 
-    private ParseResult(T? value, string? error)
+    private ParseResult(T? value, string? error, bool success)
     {
         _value = value;
-        Error = error;
+        _error = error;
+        _success = success;
     }
 
-    /// <summary>True when parsing succeeded and <see cref="Value"/> may be read.</summary>
+    /// <summary>True when parsing succeeded and <see cref="Value"/> may be read. False for <c>default</c>.</summary>
     [MemberNotNullWhen(false, nameof(Error))]
-    public bool Success => Error is null;
+    public bool Success => _success;
 
     /// <summary>What was wrong, when <see cref="Success"/> is false.</summary>
-    public string? Error { get; }
+    public string? Error => _success ? null : _error ?? "nothing was parsed";
 
     /// <summary>The parsed value.</summary>
     /// <exception cref="InvalidOperationException">Parsing failed.</exception>
     public T Value => Success ? _value! : throw new InvalidOperationException(Error);
 
     /// <summary>A successful result.</summary>
-    public static ParseResult<T> Ok(T value) => new(value, null);
+    public static ParseResult<T> Ok(T value) => new(value, null, success: true);
 
     /// <summary>A failed result with a message saying what was expected.</summary>
-    public static ParseResult<T> Fail(string error) => new(default, error);
+    public static ParseResult<T> Fail(string error) => new(default, error ?? throw new ArgumentNullException(nameof(error)), success: false);
 
     /// <summary>Returns the value, or throws <see cref="FormatException"/> with the error message.</summary>
     public T GetValueOrThrow() => Success ? _value! : throw new FormatException(Error);
