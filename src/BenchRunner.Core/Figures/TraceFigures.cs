@@ -79,7 +79,7 @@ public static class TraceFigures
 
         if (lower is null || upper is null)
         {
-            var side = lower is null && upper is null ? "on either side" : lower is null ? "below the peak" : "above the peak";
+            var side = lower is null && upper is null ? "on either side" : lower is null ? "on the low-frequency side" : "on the high-frequency side";
             return FigureResult<BandwidthResult>.Unavailable(
                 $"the level never falls {depth} {side} inside the sweep ({trace.Axis.Start} to {trace.Axis.Stop})");
         }
@@ -207,7 +207,7 @@ public static class TraceFigures
     /// The rejection (see <see cref="Rejection"/>) at <paramref name="offset"/> above or below
     /// the centre of the −3 dB band (<see cref="Bandwidth"/> with its default depth).
     /// </summary>
-    /// <returns>Unavailable when the −3 dB band is, or the offset frequency lies outside the sweep.</returns>
+    /// <returns>Unavailable when the −3 dB band is unavailable or the offset frequency lies outside the sweep.</returns>
     public static FigureResult<double> RejectionAtOffset(Trace trace, Frequency offset, bool above)
     {
         ArgumentNullException.ThrowIfNull(trace);

@@ -70,7 +70,7 @@ public class TraceFiguresBandwidthTests
         var bw = TraceFigures.Bandwidth(trace);
 
         Assert.False(bw.IsAvailable);
-        Assert.Contains("above the peak", bw.Reason);
+        Assert.Contains("high-frequency side", bw.Reason);
     }
 
     [Fact]
