@@ -6,8 +6,8 @@ namespace BenchRunner.Core.Figures;
 public static class ModulationFigures
 {
     /// <summary>
-    /// Carson's rule for frequency modulation: B = 2(Δf + fm), the band commonly said to hold
-    /// about 98 % of the signal's power.
+    /// Carson's rule for frequency modulation: B = 2(Δf + fm), the band holding nearly all of
+    /// the signal's power.
     /// </summary>
     /// <param name="peakDeviation">The peak frequency deviation Δf.</param>
     /// <param name="highestModulatingFrequency">The highest modulating frequency fm.</param>
