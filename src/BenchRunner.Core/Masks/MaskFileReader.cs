@@ -11,7 +11,7 @@ namespace BenchRunner.Core.Masks;
 /// </summary>
 internal sealed class MaskFileReader
 {
-    private const string CornerExample = "\"131 MHz: -25 dB\"";
+    private const string CornerExample = "131 MHz: -25 dB";
 
     private readonly string _source;
     private MaskReference _reference;
@@ -83,7 +83,7 @@ internal sealed class MaskFileReader
         if (upper is null && lower is null)
         {
             throw new InputFormatException(map.Location,
-                $"the mask \"{name}\" has no limit; add \"{Upper}:\" or \"{Lower}:\" with a list of corners such as \"- {CornerExample.Trim('"')}\"");
+                $"the mask \"{name}\" has no limit; add \"{Upper}:\" or \"{Lower}:\" with a list of corners such as \"- {CornerExample}\"");
         }
 
         if (_reference == MaskReference.Absolute && _unit is null)
@@ -134,7 +134,7 @@ internal sealed class MaskFileReader
         if (entry.Value is not YamlList list)
         {
             throw new InputFormatException(ValueLocation(entry),
-                $"expected a list of corners under \"{side}\", one per line such as \"- {CornerExample.Trim('"')}\"; found {Describe(entry.Value)}");
+                $"expected a list of corners under \"{side}\", one per line such as \"- {CornerExample}\"; found {Describe(entry.Value)}");
         }
 
         if (list.Items.Count == 0)
@@ -227,7 +227,7 @@ internal sealed class MaskFileReader
         if (item is not YamlMap map || map.Entries.Count == 0)
         {
             throw new InputFormatException(item.Location,
-                $"expected a corner such as {CornerExample} (a space after the colon) or \"{Gap}\" in \"{side}\"; found {Describe(item)}");
+                $"expected a corner such as \"{CornerExample}\" (a space after the colon) or \"{Gap}\" in \"{side}\"; found {Describe(item)}");
         }
 
         if (map.Entries.Count > 1)

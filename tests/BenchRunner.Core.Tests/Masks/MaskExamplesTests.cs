@@ -74,6 +74,19 @@ public class MaskExamplesTests
         Assert.All(wide.FailingSpans, s => Assert.Equal(LimitSide.Upper, s.Side));
     }
 
+    [Fact]
+    public void Parse_WholeMasksShownOnTheFormatPage_AreValid()
+    {
+        var page = File.ReadAllText(RepositoryFiles.PathOf(Path.Combine("docs", "mask-format.md")));
+        var blocks = page.Split("```yaml\n").Skip(1)
+            .Select(b => b[..b.IndexOf("```", StringComparison.Ordinal)])
+            .Where(b => b.Contains("\nmask: ", StringComparison.Ordinal) || b.StartsWith("mask: ", StringComparison.Ordinal))
+            .ToList();
+
+        Assert.NotEmpty(blocks);
+        Assert.All(blocks, b => Assert.Equal("psf-137-passband", MaskFile.Parse(b, "mask-format.md").Name));
+    }
+
     private static ComplexTrace Butterworth(FrequencyAxis axis, double f0, double bandwidth, double lossDb = 0)
     {
         var levels = axis.Hertz.Select(f => ButterworthBandpassDb(f, f0, bandwidth, order: 3) - lossDb).ToArray();
