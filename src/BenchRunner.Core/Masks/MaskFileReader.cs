@@ -1,3 +1,4 @@
+using BenchRunner.Core.Yaml;
 using BenchRunner.Core.Diagnostics;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;

@@ -2,14 +2,14 @@ using BenchRunner.Core.Diagnostics;
 using YamlDotNet.Core;
 using YamlDotNet.Core.Events;
 
-namespace BenchRunner.Core.Masks;
+namespace BenchRunner.Core.Yaml;
 
 /// <summary>
 /// Reads YAML text into a tree of <see cref="YamlItem"/>s with locations, using YamlDotNet's
 /// low-level parser. Strict where YAML itself is lenient: one document only, no aliases, no
 /// duplicate keys, keys must be scalars. Every problem is an <see cref="InputFormatException"/>.
 /// </summary>
-internal sealed class YamlTreeReader
+public sealed class YamlTreeReader
 {
     // Deeper than any sensible file; keeps hostile nesting from exhausting the stack.
     private const int MaxDepth = 64;
