@@ -10,12 +10,11 @@ namespace BenchRunner.Core.Masks;
 public static class MaskFile
 {
     /// <summary>Reads the mask file at <paramref name="path"/>; messages name the path as given.</summary>
-    /// <exception cref="InputFormatException">The file is not a valid mask.</exception>
-    /// <exception cref="IOException">The file cannot be read (missing, no permission, ...).</exception>
+    /// <exception cref="InputFormatException">The file is missing, unreadable or not a valid mask.</exception>
     public static LimitMask Load(string path)
     {
         ArgumentException.ThrowIfNullOrEmpty(path);
-        return Parse(File.ReadAllText(path), path);
+        return Parse(InputFile.ReadAllText(path), path);
     }
 
     /// <summary>Parses mask text.</summary>
