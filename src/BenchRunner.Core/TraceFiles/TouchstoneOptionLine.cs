@@ -20,8 +20,8 @@ internal sealed record TouchstoneOptionLine(
     public static TouchstoneOptionLine Defaults { get; } =
         new(TouchstoneFrequencyUnit.Gigahertz, TouchstoneParameter.S, TouchstoneFormat.MagnitudeAngle, 50);
 
-    /// <summary>The frequency unit in hertz.</summary>
-    public double Scale => TouchstoneWords.Scale(Unit);
+    /// <summary>The frequency unit as a power of ten of hertz.</summary>
+    public int PowerOfTen => TouchstoneWords.PowerOfTen(Unit);
 
     /// <summary>Parses the option line whose <c>#</c> is at 0-based <paramref name="hashIndex"/>.</summary>
     /// <exception cref="InputFormatException">An unknown or repeated word, a bad resistance, or H/G parameters.</exception>

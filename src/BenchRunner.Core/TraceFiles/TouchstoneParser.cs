@@ -380,17 +380,20 @@ internal sealed partial class TouchstoneParser
         if (_pending is null)
         {
             var first = tokens[0];
-            var value = TraceFileText.ParseNumber(first, _source, _line);
+            if (!TraceFileText.TryParseScaled(first.Text, _options.PowerOfTen, out var hertz))
+            {
+                throw Error(first.Column, $"expected a number, found \"{first.Text}\"");
+            }
 
             // Version 1 two-port files may append noise parameters (5 values a line), which begin
             // at a frequency not above the last network frequency. They are skipped.
-            if (_version == 1 && _ports == 2 && tokens.Count == 5 && _hertz.Count > 0 && value * _options.Scale <= _hertz[^1])
+            if (_version == 1 && _ports == 2 && tokens.Count == 5 && _hertz.Count > 0 && hertz <= _hertz[^1])
             {
                 _section = Section.NoiseData;
                 return;
             }
 
-            StartPoint(first, value);
+            StartPoint(first, hertz);
             index = 1;
         }
 
@@ -439,10 +442,9 @@ internal sealed partial class TouchstoneParser
         };
     }
 
-    private void StartPoint(TextToken token, double value)
+    private void StartPoint(TextToken token, double hertz)
     {
-        double hertz = value * _options!.Scale;
-        if (value < 0 || !double.IsFinite(hertz))
+        if (hertz < 0)
         {
             throw Error(token.Column, $"expected a frequency of 0 or more, found \"{token.Text}\"");
         }

@@ -5,12 +5,13 @@ namespace BenchRunner.Core.TraceFiles;
 /// <summary>The option-line words of Touchstone and the decoding of its number pairs.</summary>
 internal static class TouchstoneWords
 {
-    public static double Scale(TouchstoneFrequencyUnit unit) => unit switch
+    /// <summary>The unit as a power of ten of hertz: 0, 3, 6 or 9.</summary>
+    public static int PowerOfTen(TouchstoneFrequencyUnit unit) => unit switch
     {
-        TouchstoneFrequencyUnit.Hertz => 1,
-        TouchstoneFrequencyUnit.Kilohertz => 1e3,
-        TouchstoneFrequencyUnit.Megahertz => 1e6,
-        TouchstoneFrequencyUnit.Gigahertz => 1e9,
+        TouchstoneFrequencyUnit.Hertz => 0,
+        TouchstoneFrequencyUnit.Kilohertz => 3,
+        TouchstoneFrequencyUnit.Megahertz => 6,
+        TouchstoneFrequencyUnit.Gigahertz => 9,
         _ => throw new ArgumentOutOfRangeException(nameof(unit), unit, null),
     };
 

@@ -48,7 +48,7 @@ public static class TouchstoneWriter
         }
 
         var points = Points(data, references);
-        double scale = TouchstoneWords.Scale(options.FrequencyUnit);
+        int powerOfTen = TouchstoneWords.PowerOfTen(options.FrequencyUnit);
 
         foreach (var comment in options.Comments)
         {
@@ -85,7 +85,7 @@ public static class TouchstoneWriter
         bool columnsFirst = options.Version == 1 && n == 2;
         for (int p = 0; p < data.Axis.Count; p++)
         {
-            var line = new StringBuilder(TraceFileText.FormatScaled(data.Axis.Hertz[p], scale));
+            var line = new StringBuilder(TraceFileText.FormatScaled(data.Axis.Hertz[p], powerOfTen));
             for (int row = 0; row < n; row++)
             {
                 for (int col = 0; col < n; col++)

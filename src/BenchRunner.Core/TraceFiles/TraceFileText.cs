@@ -26,22 +26,52 @@ internal static class TraceFileText
     public static string Format(double value) => value.ToString("R", CultureInfo.InvariantCulture);
 
     /// <summary>
-    /// Formats <paramref name="hertz"/> divided by <paramref name="scale"/> with the fewest digits
-    /// (15 to 17 significant) that read back, multiplied by the scale, to exactly the same hertz,
-    /// so that 137.5 MHz is written as <c>137.5</c> rather than <c>137.50000000000003</c>.
+    /// Parses <paramref name="text"/> times 10^<paramref name="powerOfTen"/> by moving the decimal
+    /// exponent before conversion, so that "137.5" MHz gives exactly the double nearest
+    /// 137 500 000 rather than the product of two rounded numbers.
     /// </summary>
-    public static string FormatScaled(double hertz, double scale)
+    public static bool TryParseScaled(string text, int powerOfTen, out double value)
     {
-        var scaled = hertz / scale;
+        if (powerOfTen == 0)
+        {
+            return TryParseNumber(text, out value);
+        }
+
+        int e = text.IndexOfAny(['e', 'E']);
+        int exponent = 0;
+        if (e >= 0 && !int.TryParse(text.AsSpan(e + 1), NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out exponent))
+        {
+            value = 0;
+            return false;
+        }
+
+        var mantissa = e >= 0 ? text[..e] : text;
+        var shifted = mantissa + "E" + (exponent + powerOfTen).ToString(CultureInfo.InvariantCulture);
+        return TryParseNumber(shifted, out value);
+    }
+
+    /// <summary>
+    /// Formats <paramref name="hertz"/> in units of 10^<paramref name="powerOfTen"/> Hz with the
+    /// fewest digits (15 to 17 significant) that <see cref="TryParseScaled"/> reads back to exactly
+    /// the same hertz, so that 137.5 MHz is written as <c>137.5</c>. Should none do, the hertz are
+    /// written with an exponent (<c>133500000.00000001E-9</c>), which also reads back exactly.
+    /// </summary>
+    public static string FormatScaled(double hertz, int powerOfTen)
+    {
+        var scaled = hertz / Math.Pow(10, powerOfTen);
         for (int digits = 15; digits <= 17; digits++)
         {
             var text = scaled.ToString("G" + digits.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
-            if (TryParseNumber(text, out var back) && back * scale == hertz)
+            if (TryParseScaled(text, powerOfTen, out var back) && back == hertz)
             {
                 return text;
             }
         }
 
-        return Format(scaled);
+        var exact = Format(hertz);
+        int e = exact.IndexOf('E');
+        return e < 0
+            ? exact + "E" + (-powerOfTen).ToString(CultureInfo.InvariantCulture)
+            : exact[..e] + "E" + (int.Parse(exact.AsSpan(e + 1), NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture) - powerOfTen).ToString(CultureInfo.InvariantCulture);
     }
 }
