@@ -3,6 +3,10 @@ namespace BenchRunner.Cli;
 /// <summary>The <c>benchrunner</c> executable.</summary>
 public static class Program
 {
-    /// <summary>Runs the command line and returns the process exit code.</summary>
-    public static int Main(string[] args) => args.Length == 0 ? 0 : 2;
+    /// <summary>Runs the command line and returns the process exit code (see <see cref="ExitCodes"/>).</summary>
+    public static int Main(string[] args)
+    {
+        var console = new CliConsole(Console.Out, Console.Error, UseColour: !Console.IsOutputRedirected && Environment.GetEnvironmentVariable("NO_COLOR") is null);
+        return CliApplication.Run(args, console);
+    }
 }

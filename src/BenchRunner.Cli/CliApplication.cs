@@ -1,0 +1,79 @@
+using System.CommandLine;
+using System.Text.Json.Nodes;
+using BenchRunner.Cli.Commands;
+using BenchRunner.Core.Diagnostics;
+
+namespace BenchRunner.Cli;
+
+/// <summary>Builds the verb tree and runs one command line, mapping failures to exit codes.</summary>
+public static class CliApplication
+{
+    /// <summary>Parses <paramref name="args"/>, runs the verb and returns its exit code.</summary>
+    public static int Run(string[] args, CliConsole console)
+    {
+        var root = BuildRoot(console);
+        var parsed = root.Parse(args);
+        if (parsed.Errors.Count > 0)
+        {
+            foreach (var error in parsed.Errors)
+            {
+                console.Error.WriteLine($"benchrunner: {error.Message}");
+            }
+
+            var verb = parsed.CommandResult.Command;
+            var helpHint = verb == root ? "benchrunner --help" : $"benchrunner {verb.Name} --help";
+            console.Error.WriteLine($"Run '{helpHint}' to see what it accepts.");
+            return ExitCodes.BadInput;
+        }
+
+        try
+        {
+            return parsed.Invoke(new InvocationConfiguration
+            {
+                Output = console.Out,
+                Error = console.Error,
+                EnableDefaultExceptionHandler = false,
+            });
+        }
+        catch (Exception ex) when (ex is InputFormatException or UsageException)
+        {
+            return Fail(console, args, ExitCodes.BadInput, ex.Message);
+        }
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
+        {
+            return Fail(console, args, ExitCodes.InstrumentFailure, ex.Message);
+        }
+        catch (OperationCanceledException)
+        {
+            return Fail(console, args, ExitCodes.Stopped, "stopped by the operator; everything acquired so far is kept.");
+        }
+    }
+
+    /// <summary>
+    /// Reports a failure in one line on standard error; with <c>--json</c>, also as a JSON
+    /// document on standard output so that a script always gets one document.
+    /// </summary>
+    private static int Fail(CliConsole console, string[] args, int exitCode, string message)
+    {
+        console.Error.WriteLine($"benchrunner: {message}");
+        if (args.Contains(CommonOptions.JsonName))
+        {
+            var document = new JsonObject
+            {
+                ["error"] = new JsonObject { ["exit_code"] = exitCode, ["message"] = message },
+            };
+            console.Out.WriteLine(document.ToJsonString());
+        }
+
+        return exitCode;
+    }
+
+    private static RootCommand BuildRoot(CliConsole console)
+    {
+        var root = new RootCommand(
+            "BenchRunner drives low-cost RF instruments, runs test plans against limit masks and logs every sweep.");
+        root.Subcommands.Add(CheckCommand.Create(console));
+        root.Subcommands.Add(PortsCommand.Create(console));
+        return root;
+    }
+}
