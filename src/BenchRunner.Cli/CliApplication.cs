@@ -12,10 +12,15 @@ public static class CliApplication
     public static int Run(string[] args, CliConsole console)
     {
         var root = BuildRoot(console);
-        var parsed = root.Parse(args);
+        // Bare "benchrunner" shows what it can do rather than an error.
+        var parsed = root.Parse(args.Length == 0 ? ["--help"] : args);
         if (parsed.Errors.Count > 0)
         {
-            foreach (var error in parsed.Errors)
+            // "Required command was not provided" only repeats an unrecognised verb's error.
+            var errors = parsed.Errors.Count > 1 && parsed.UnmatchedTokens.Count > 0
+                ? parsed.Errors.Where(e => !e.Message.StartsWith("Required command", StringComparison.Ordinal))
+                : parsed.Errors;
+            foreach (var error in errors)
             {
                 console.Error.WriteLine($"benchrunner: {error.Message}");
             }
