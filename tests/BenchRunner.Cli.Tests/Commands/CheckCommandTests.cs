@@ -6,10 +6,10 @@ namespace BenchRunner.Cli.Tests.Commands;
 
 public sealed class CheckCommandTests
 {
-    private static readonly string GoodBoard = RepoPaths.Example("psf-24-0001.s2p");
-    private static readonly string DetunedBoard = RepoPaths.Example("psf-24-0002.s2p");
-    private static readonly string GoodBoardCsv = RepoPaths.Example("psf-24-0001.csv");
-    private static readonly string PassbandMask = RepoPaths.Example("psf-137-passband.yaml");
+    private static readonly string GoodBoard = RepositoryFiles.Example("psf-24-0001.s2p");
+    private static readonly string DetunedBoard = RepositoryFiles.Example("psf-24-0002.s2p");
+    private static readonly string GoodBoardCsv = RepositoryFiles.Example("psf-24-0001.csv");
+    private static readonly string PassbandMask = RepositoryFiles.Example("psf-137-passband.yaml");
 
     [Fact]
     public void Check_GoodBoard_PassesWithExitCodeZero()

@@ -115,7 +115,7 @@ public partial class CsvTraceFileTests
     [Fact]
     public void Read_File_UsesPathInErrors()
     {
-        using var dir = new Support.TempDirectory();
+        using var dir = new TempDirectory();
         var path = dir.Write("bad.csv", Lines("frequency_hz,power_dbm", "1,x"));
 
         var ex = Assert.Throws<Core.Diagnostics.InputFormatException>(() => CsvTraceFile.Read(path));

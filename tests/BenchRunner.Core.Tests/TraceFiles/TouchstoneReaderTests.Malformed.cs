@@ -270,7 +270,7 @@ public partial class TouchstoneReaderTests
     [Fact]
     public void Read_TsFileWithoutVersion_Throws()
     {
-        using var dir = new Support.TempDirectory();
+        using var dir = new TempDirectory();
         var path = dir.Write("psf.ts", Lines("# MHz S DB R 50", "137.5 -30.1 12"));
 
         var ex = Assert.Throws<InputFormatException>(() => TouchstoneReader.Read(path));

@@ -1,17 +1,19 @@
-namespace BenchRunner.Core.Tests.Support;
+namespace BenchRunner.Tests.Shared;
 
-/// <summary>A fresh directory under the system temporary folder, deleted on dispose.</summary>
+/// <summary>A fresh folder under the system's temporary folder, deleted on dispose.</summary>
 internal sealed class TempDirectory : IDisposable
 {
+    /// <summary>Creates the folder.</summary>
     public TempDirectory()
     {
         Path = System.IO.Path.Combine(System.IO.Path.GetTempPath(), "benchrunner-tests-" + Guid.NewGuid().ToString("N"));
         Directory.CreateDirectory(Path);
     }
 
+    /// <summary>The folder.</summary>
     public string Path { get; }
 
-    /// <summary>Writes <paramref name="text"/> to a file named <paramref name="name"/> and returns its path.</summary>
+    /// <summary>Writes <paramref name="text"/> to a file named <paramref name="name"/> in the folder and returns its path.</summary>
     public string Write(string name, string text)
     {
         var path = System.IO.Path.Combine(Path, name);
@@ -19,6 +21,10 @@ internal sealed class TempDirectory : IDisposable
         return path;
     }
 
+    /// <summary>The path of <paramref name="name"/> in the folder (the file need not exist).</summary>
+    public string PathOf(string name) => System.IO.Path.Combine(Path, name);
+
+    /// <inheritdoc/>
     public void Dispose()
     {
         try

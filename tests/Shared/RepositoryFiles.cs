@@ -1,12 +1,15 @@
-namespace BenchRunner.Cli.Tests.Support;
+namespace BenchRunner.Tests.Shared;
 
-/// <summary>Finds files of the checkout (the bundled examples) from the test's output folder.</summary>
-public static class RepoPaths
+/// <summary>Finds files of the checkout (examples, docs) from a test's output folder.</summary>
+internal static class RepositoryFiles
 {
     private static readonly Lazy<string> RootPath = new(FindRoot);
 
     /// <summary>The repository root: the folder holding BenchRunner.sln.</summary>
     public static string Root => RootPath.Value;
+
+    /// <summary>The absolute path of <paramref name="relativePath"/> under the repository root.</summary>
+    public static string PathOf(string relativePath) => Path.Combine(Root, relativePath);
 
     /// <summary>A file in docs/examples.</summary>
     public static string Example(string name) => Path.Combine(Root, "docs", "examples", name);
@@ -21,6 +24,6 @@ public static class RepoPaths
             }
         }
 
-        throw new InvalidOperationException("BenchRunner.sln not found above the test output folder.");
+        throw new InvalidOperationException("The repository root (holding BenchRunner.sln) was not found above " + AppContext.BaseDirectory);
     }
 }
