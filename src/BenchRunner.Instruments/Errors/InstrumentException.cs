@@ -20,8 +20,10 @@ public class InstrumentException : Exception
     /// <summary>Whether the same operation may succeed if tried again (timeouts, I/O errors, garbled replies).</summary>
     public bool IsTransient { get; }
 
+    private string? _instrument;
+
     /// <summary>The bench name of the instrument (e.g. <c>vna</c>), when known.</summary>
-    public string? Instrument { get; init; }
+    public string? Instrument { get => _instrument; init => _instrument = value; }
 
     /// <summary>The command being carried out, when known.</summary>
     public string? Command { get; init; }
@@ -41,6 +43,9 @@ public class InstrumentException : Exception
             return text;
         }
     }
+
+    /// <summary>Names the instrument when the layer that raised the error did not know it.</summary>
+    internal void NameInstrument(string name) => _instrument ??= name;
 
     /// <summary>Shows control characters as escapes and shortens long text, for messages and logs.</summary>
     public static string Printable(string text, int maxLength = 120)
