@@ -289,7 +289,7 @@ public sealed class ScpiSession : IAsyncDisposable
                 return true;
             }, cancellationToken).ConfigureAwait(false);
 
-            // Only our own "1" may still come before the identification, if a late one was taken for it.
+            // A late "1" may have been taken for ours; then ours still comes before the identification.
             var identity = await SkipUntilAsync("*IDN?", reply => !IsOne(reply), skippable: IsOne, Remaining, cancellationToken).ConfigureAwait(false);
             if (!InstrumentIdentity.ParseIdn(identity).Success)
             {
