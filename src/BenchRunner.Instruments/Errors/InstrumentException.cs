@@ -31,6 +31,12 @@ public class InstrumentException : Exception
     /// <summary>What the instrument sent back (possibly partial), when anything came.</summary>
     public string? Reply { get; init; }
 
+    /// <summary>
+    /// What went wrong, without the instrument, command and reply; lets a layer that adds
+    /// that context re-raise the failure without repeating it.
+    /// </summary>
+    public string Detail => base.Message;
+
     /// <summary>The message with the instrument, command and reply appended where known.</summary>
     public override string Message
     {
