@@ -79,6 +79,7 @@ public static class CliApplication
             "BenchRunner drives low-cost RF instruments, runs test plans against limit masks and logs every sweep.");
         root.Subcommands.Add(CheckCommand.Create(console));
         root.Subcommands.Add(PortsCommand.Create(console));
+        root.Subcommands.Add(ReplayCommand.Create(console));
         return root;
     }
 }

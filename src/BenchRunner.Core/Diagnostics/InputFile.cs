@@ -9,12 +9,19 @@ public static class InputFile
 {
     /// <summary>The whole text of <paramref name="path"/>.</summary>
     /// <exception cref="InputFormatException">The file is missing, is a folder, or cannot be read.</exception>
-    public static string ReadAllText(string path)
+    public static string ReadAllText(string path) => Guard(path, () => File.ReadAllText(path));
+
+    /// <summary>Opens <paramref name="path"/> for reading as text in <paramref name="encoding"/> (no byte-order-mark detection).</summary>
+    /// <exception cref="InputFormatException">The file is missing, is a folder, or cannot be read.</exception>
+    public static StreamReader OpenText(string path, System.Text.Encoding encoding) =>
+        Guard(path, () => new StreamReader(path, encoding, detectEncodingFromByteOrderMarks: false));
+
+    private static T Guard<T>(string path, Func<T> open)
     {
         ArgumentException.ThrowIfNullOrEmpty(path);
         try
         {
-            return File.ReadAllText(path);
+            return open();
         }
         catch (Exception ex) when (ex is FileNotFoundException or DirectoryNotFoundException)
         {

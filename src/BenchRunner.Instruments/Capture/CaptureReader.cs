@@ -19,7 +19,7 @@ public static class CaptureReader
     {
         ArgumentException.ThrowIfNullOrEmpty(path);
         // Latin-1 maps every byte to one character, so a stray non-ASCII byte is reported at its own column.
-        using var reader = new StreamReader(path, Encoding.Latin1, detectEncodingFromByteOrderMarks: false);
+        using var reader = InputFile.OpenText(path, Encoding.Latin1);
         return Parse(reader, path);
     }
 
