@@ -29,6 +29,12 @@ public class InstrumentException : Exception
     /// <summary>What the instrument sent back (possibly partial), when anything came.</summary>
     public string? Reply { get; init; }
 
+    /// <summary>
+    /// What went wrong, without the instrument, command and reply; for a layer that catches the
+    /// exception and raises it again with those filled in.
+    /// </summary>
+    public string Summary => base.Message;
+
     /// <summary>The message with the instrument, command and reply appended where known.</summary>
     public override string Message
     {
