@@ -44,7 +44,7 @@ internal sealed class CapabilitySectionReader(ProfileReadContext context)
         }
 
         var setup = context.Commands(s, Setup, TemplateVariables.Spectrum,
-            "the setup sets span, RBW, attenuation and reference level, e.g. \"setup: [span {start:hz} {stop:hz}, rbw {rbw:hz}]\"");
+            "the setup sets span, RBW, attenuation and reference level, e.g. \"setup: ['span {start:hz} {stop:hz}', 'rbw {rbw:hz}']\"");
         CheckCoversRange(s, setup);
         var sweep = context.Commands(s, Sweep, TemplateVariables.Spectrum);
         var read = context.Command(s, Read, TemplateVariables.Spectrum, "the command that reads the trace, e.g. \"read: trace\"");
