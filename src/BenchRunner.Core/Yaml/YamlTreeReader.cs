@@ -51,7 +51,7 @@ public sealed class YamlTreeReader
         Expect<DocumentEnd>();
         if (_parser.Accept<DocumentStart>(out var second))
         {
-            throw new InputFormatException(At(second), "a second YAML document starts here; a file holds one mask");
+            throw new InputFormatException(At(second), "a second YAML document starts here; a file holds one document");
         }
 
         Expect<StreamEnd>();

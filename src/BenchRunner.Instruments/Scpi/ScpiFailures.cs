@@ -5,19 +5,6 @@ namespace BenchRunner.Instruments.Scpi;
 /// <summary>Builds the exceptions of the SCPI adapter, each naming instrument, command and reply.</summary>
 internal static class ScpiFailures
 {
-    /// <summary>The same failure, of the same type, with the instrument and command attached.</summary>
-    public static InstrumentException WithContext(InstrumentException failure, string instrument, string? command)
-    {
-        command ??= failure.Command;
-        return failure switch
-        {
-            InstrumentTimeoutException => new InstrumentTimeoutException(failure.Detail, failure) { Instrument = instrument, Command = command, Reply = failure.Reply },
-            FramingException => new FramingException(failure.Detail, failure) { Instrument = instrument, Command = command, Reply = failure.Reply },
-            InstrumentReportedException reported => new InstrumentReportedException(reported.Code, reported.Text, failure.Detail) { Instrument = instrument, Command = command, Reply = failure.Reply },
-            _ => new InstrumentException(failure.Detail, failure.IsTransient, failure) { Instrument = instrument, Command = command, Reply = failure.Reply },
-        };
-    }
-
     /// <summary>
     /// The exception for error-queue entries read after <paramref name="command"/>: its code and text
     /// are those of the first real error (a queue overflow entry only when it is all there is), its

@@ -80,7 +80,7 @@ public sealed class ScpiSession : IAsyncDisposable
             }
             catch (InstrumentException ex)
             {
-                throw ScpiFailures.WithContext(ex, Instrument, ex.Command);
+                throw InstrumentFailures.WithContext(ex, Instrument, ex.Command);
             }
 
             _connection.DiscardBuffered();
@@ -419,7 +419,7 @@ public sealed class ScpiSession : IAsyncDisposable
         catch (InstrumentException ex) when (ex is InstrumentTimeoutException or FramingException)
         {
             _state = SessionState.Broken;
-            throw ScpiFailures.WithContext(ex, Instrument, command);
+            throw InstrumentFailures.WithContext(ex, Instrument, command);
         }
         catch (OperationCanceledException)
         {

@@ -1,10 +1,10 @@
-namespace BenchRunner.Instruments.Tests.Support;
+namespace BenchRunner.Tests.Shared;
 
 /// <summary>
 /// A clock that moves only when a test calls <see cref="Advance"/>. Timers (and so
 /// <c>Task.Delay(t, provider)</c> and timed cancellation sources) fire during Advance, in due order.
 /// </summary>
-public sealed class ManualTimeProvider : TimeProvider
+internal sealed class ManualTimeProvider : TimeProvider
 {
     private readonly Lock _lock = new();
     private readonly List<ManualTimer> _timers = [];
@@ -51,6 +51,21 @@ public sealed class ManualTimeProvider : TimeProvider
         var timer = new ManualTimer(this, callback, state);
         timer.Change(dueTime, period);
         return timer;
+    }
+
+    /// <summary>Waits (in real time, at most 10 s) until at least <paramref name="count"/> timers are pending.</summary>
+    public async Task WaitForTimersAsync(int count)
+    {
+        var deadline = DateTime.UtcNow + TimeSpan.FromSeconds(10);
+        while (PendingTimerCount < count)
+        {
+            if (DateTime.UtcNow > deadline)
+            {
+                throw new TimeoutException($"Expected {count} pending timers, found {PendingTimerCount}.");
+            }
+
+            await Task.Delay(5);
+        }
     }
 
     /// <summary>Moves the clock on by <paramref name="by"/>, firing the timers that fall due on the way.</summary>
