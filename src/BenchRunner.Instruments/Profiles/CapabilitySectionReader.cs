@@ -11,7 +11,7 @@ internal sealed class CapabilitySectionReader(ProfileReadContext context)
 
     public NetworkAnalyserCommands? ReadNetworkAnalyser(StrictMap profile)
     {
-        var s = profile.Mapping(NetworkAnalyser, NetworkKeys);
+        var s = ForeignKeys.Mapping(profile, NetworkAnalyser, NetworkKeys, AdapterKind.Raw, ForeignKeys.ScpiInRawNetwork);
         if (s is null)
         {
             return null;
@@ -37,7 +37,7 @@ internal sealed class CapabilitySectionReader(ProfileReadContext context)
 
     public SpectrumAnalyserCommands? ReadSpectrumAnalyser(StrictMap profile)
     {
-        var s = profile.Mapping(SpectrumAnalyser, SpectrumKeys);
+        var s = ForeignKeys.Mapping(profile, SpectrumAnalyser, SpectrumKeys, AdapterKind.Raw, ForeignKeys.ScpiInRawSpectrum);
         if (s is null)
         {
             return null;

@@ -1,40 +1,38 @@
 using BenchRunner.Core.Diagnostics;
 using BenchRunner.Instruments.Capabilities;
 using BenchRunner.Instruments.Framing;
+using BenchRunner.Instruments.Scpi;
 
 namespace BenchRunner.Instruments.Profiles;
 
 /// <summary>
-/// A driver profile: the whole line-based dialect of a serial instrument as data — framing,
-/// timing, identity, limits, error replies, and per capability the command templates and the
-/// reply grammar (format in <c>docs/profile-format.md</c>). <see cref="ProfileInstrument"/> speaks it.
+/// A driver profile (format in <c>docs/profile-format.md</c>). With <c>adapter: raw</c> it holds the
+/// whole line-based dialect of a serial instrument as data — framing, timing, identity, limits,
+/// error replies, and per capability the command templates and the reply grammar — and
+/// <see cref="ProfileInstrument"/> speaks it. With <c>adapter: scpi</c> it holds a
+/// <see cref="ScpiCommandSet"/> and <see cref="ScpiInstrumentOptions"/> for a
+/// <see cref="ScpiInstrument"/>. <see cref="Adapters.InstrumentAdapterFactory"/> builds either.
 /// </summary>
 public sealed class DriverProfile
 {
-    internal DriverProfile(string name, string? description, string adapter, IReadOnlyList<InstrumentKind> kinds,
-        FramingOptions framing, string? acknowledgement, ProfileTiming timing, IdentityRule identity, InstrumentLimits limits,
-        ErrorReplyRule? errorReply, BoolWords boolWords, IReadOnlyList<CommandTemplate> onConnect,
-        NetworkAnalyserCommands? networkAnalyser, SpectrumAnalyserCommands? spectrumAnalyser, SignalGeneratorCommands? signalGenerator)
+    private DriverProfile(string name, string? description, AdapterKind adapter, IReadOnlyList<InstrumentKind> kinds,
+        FramingOptions framing, ProfileTiming timing, InstrumentLimits limits)
     {
         Name = name;
         Description = description;
-        Adapter = adapter;
+        AdapterKind = adapter;
+        Adapter = adapter == AdapterKind.Scpi ? ScpiAdapter : RawAdapter;
         Kinds = kinds;
         Framing = framing;
-        Acknowledgement = acknowledgement;
         Timing = timing;
-        Identity = identity;
         Limits = limits;
-        ErrorReply = errorReply;
-        BoolWords = boolWords;
-        OnConnect = onConnect;
-        NetworkAnalyser = networkAnalyser;
-        SpectrumAnalyser = spectrumAnalyser;
-        SignalGenerator = signalGenerator;
     }
 
-    /// <summary>The adapter of every profile read today: a raw line dialect.</summary>
+    /// <summary>The word of a raw line-dialect profile: <c>adapter: raw</c>.</summary>
     public const string RawAdapter = "raw";
+
+    /// <summary>The word of a SCPI profile: <c>adapter: scpi</c>.</summary>
+    public const string ScpiAdapter = "scpi";
 
     /// <summary>The profile's name (<c>profile:</c>).</summary>
     public string Name { get; }
@@ -42,44 +40,85 @@ public sealed class DriverProfile
     /// <summary>Free text, or null.</summary>
     public string? Description { get; }
 
-    /// <summary>The adapter that speaks the profile: <see cref="RawAdapter"/>.</summary>
+    /// <summary>The adapter that speaks the profile, as written: <see cref="RawAdapter"/> or <see cref="ScpiAdapter"/>.</summary>
     public string Adapter { get; }
+
+    /// <summary>The adapter that speaks the profile.</summary>
+    public AdapterKind AdapterKind { get; }
 
     /// <summary>What the instrument is, in the order written; each kind has its section.</summary>
     public IReadOnlyList<InstrumentKind> Kinds { get; }
 
-    /// <summary>Terminators, prompt, echo and message size.</summary>
+    /// <summary>Terminators, prompt, echo and message size (a scpi profile has no prompt and no echo).</summary>
     public FramingOptions Framing { get; }
 
-    /// <summary>The line the device sends after a setting it accepted (e.g. <c>ok</c>), or null when it sends nothing.</summary>
-    public string? Acknowledgement { get; }
-
-    /// <summary>Timeouts and settle delays.</summary>
+    /// <summary>
+    /// Timeouts and settle delays. For a scpi profile the command timeout is the session's
+    /// <see cref="ScpiSessionOptions.CommandTimeout"/>, the sweep timeout its
+    /// <see cref="ScpiSessionOptions.CompletionTimeout"/>, and there are no settle delays.
+    /// </summary>
     public ProfileTiming Timing { get; }
-
-    /// <summary>How the identity is learnt.</summary>
-    public IdentityRule Identity { get; }
 
     /// <summary>The declared limits.</summary>
     public InstrumentLimits Limits { get; }
 
-    /// <summary>How an error reply is recognised, or null when the device reports none.</summary>
-    public ErrorReplyRule? ErrorReply { get; }
+    /// <summary>Raw: the line the device sends after a setting it accepted (e.g. <c>ok</c>), or null when it sends nothing.</summary>
+    public string? Acknowledgement { get; private init; }
 
-    /// <summary>The words written for a switch placeholder.</summary>
-    public BoolWords BoolWords { get; }
+    /// <summary>Raw: how the identity is learnt. Null for a scpi profile, whose instrument answers <c>*IDN?</c>.</summary>
+    public IdentityRule? Identity { get; private init; }
 
-    /// <summary>Commands sent after the identity at each connection, to bring the device to a known state.</summary>
-    public IReadOnlyList<CommandTemplate> OnConnect { get; }
+    /// <summary>Raw: how an error reply is recognised, or null when the device reports none (and for a scpi profile).</summary>
+    public ErrorReplyRule? ErrorReply { get; private init; }
 
-    /// <summary>The network analyser commands, or null when not a network analyser.</summary>
-    public NetworkAnalyserCommands? NetworkAnalyser { get; }
+    /// <summary>Raw: the words written for a switch placeholder (the default <c>on</c>/<c>off</c> for a scpi profile, which sends ON and OFF).</summary>
+    public BoolWords BoolWords { get; private init; } = BoolWords.Default;
 
-    /// <summary>The spectrum analyser commands, or null when not a spectrum analyser.</summary>
-    public SpectrumAnalyserCommands? SpectrumAnalyser { get; }
+    /// <summary>Raw: commands sent after the identity at each connection, to bring the device to a known state (none for a scpi profile).</summary>
+    public IReadOnlyList<CommandTemplate> OnConnect { get; private init; } = [];
 
-    /// <summary>The signal generator commands, or null when not a signal generator.</summary>
-    public SignalGeneratorCommands? SignalGenerator { get; }
+    /// <summary>Raw: the network analyser commands, or null when not a network analyser (and for a scpi profile).</summary>
+    public NetworkAnalyserCommands? NetworkAnalyser { get; private init; }
+
+    /// <summary>Raw: the spectrum analyser commands, or null when not a spectrum analyser (and for a scpi profile).</summary>
+    public SpectrumAnalyserCommands? SpectrumAnalyser { get; private init; }
+
+    /// <summary>Raw: the signal generator commands, or null when not a signal generator (and for a scpi profile).</summary>
+    public SignalGeneratorCommands? SignalGenerator { get; private init; }
+
+    /// <summary>
+    /// Scpi: the command set, with a section enabled for each kind listed and every command the
+    /// profile leaves out at its default; null for a raw profile. It is shared by every instrument
+    /// built from this profile: do not change it (its trace-query dictionaries included).
+    /// </summary>
+    public ScpiCommandSet? ScpiCommands { get; private init; }
+
+    /// <summary>Scpi: timeouts, error-queue draining, framing and reset on connect; null for a raw profile.</summary>
+    public ScpiInstrumentOptions? ScpiOptions { get; private init; }
+
+    internal static DriverProfile ForRaw(string name, string? description, IReadOnlyList<InstrumentKind> kinds,
+        FramingOptions framing, string? acknowledgement, ProfileTiming timing, IdentityRule identity, InstrumentLimits limits,
+        ErrorReplyRule? errorReply, BoolWords boolWords, IReadOnlyList<CommandTemplate> onConnect,
+        NetworkAnalyserCommands? networkAnalyser, SpectrumAnalyserCommands? spectrumAnalyser, SignalGeneratorCommands? signalGenerator) =>
+        new(name, description, AdapterKind.Raw, kinds, framing, timing, limits)
+        {
+            Acknowledgement = acknowledgement,
+            Identity = identity,
+            ErrorReply = errorReply,
+            BoolWords = boolWords,
+            OnConnect = onConnect,
+            NetworkAnalyser = networkAnalyser,
+            SpectrumAnalyser = spectrumAnalyser,
+            SignalGenerator = signalGenerator,
+        };
+
+    internal static DriverProfile ForScpi(string name, string? description, IReadOnlyList<InstrumentKind> kinds,
+        ProfileTiming timing, InstrumentLimits limits, ScpiCommandSet commands, ScpiInstrumentOptions options) =>
+        new(name, description, AdapterKind.Scpi, kinds, options.Framing ?? new FramingOptions(), timing, limits)
+        {
+            ScpiCommands = commands,
+            ScpiOptions = options,
+        };
 
     /// <summary>Reads the profile file at <paramref name="path"/>; messages name the path as given.</summary>
     /// <exception cref="InputFormatException">The file is not a valid profile; it holds every problem found.</exception>

@@ -3,6 +3,7 @@ using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Yaml;
 using BenchRunner.Instruments.Capabilities;
 using BenchRunner.Instruments.Framing;
+using BenchRunner.Instruments.Scpi;
 using static BenchRunner.Instruments.Profiles.DriverProfileKeys;
 
 namespace BenchRunner.Instruments.Profiles;
@@ -35,7 +36,10 @@ internal sealed class DriverProfileReader
 
     private DriverProfile? ReadProfile(YamlItem root)
     {
-        var map = StrictMap.Open(root, "the profile", Top, _problems);
+        var adapter = ReadAdapter(root);
+        bool scpi = adapter == AdapterKind.Scpi;
+        var map = ForeignKeys.Open(root, "the profile", scpi ? ScpiProfileKeys.Top : Top, adapter,
+            scpi ? ForeignKeys.RawInScpiTop : ForeignKeys.ScpiInRawTop, _problems);
         if (map is null)
         {
             return null;
@@ -43,13 +47,22 @@ internal sealed class DriverProfileReader
 
         var name = OneLine(map, Profile, "every profile needs a name, e.g. \"profile: bench-vna\"");
         var description = map.Text(Description)?.Value.Trim();
-        var adapter = ReadAdapter(map);
         var kinds = ReadKinds(map);
-        _context.Words = ReadBoolWords(map);
-        var (framing, acknowledgement) = ReadFraming(map);
-        _context.Prompt = framing.Prompt;
-        var timing = ReadTiming(map);
+        var (framing, acknowledgement) = ReadFraming(map, adapter);
+        var timing = ReadTiming(map, adapter);
         var limits = ReadLimits(map);
+        CheckKindsAgainstSections(map, kinds, sectionRequired: !scpi);
+        var kindList = kinds.Select(k => k.Kind).ToList();
+        if (scpi)
+        {
+            var read = new ScpiProfileReader(_problems).Read(map, kindList, framing, timing);
+            return _problems.Any || read is not { } set
+                ? null
+                : DriverProfile.ForScpi(name!, description, kindList, timing, limits, set.Commands, set.Options);
+        }
+
+        _context.Words = ReadBoolWords(map);
+        _context.Prompt = framing.Prompt;
         var identity = ReadIdentity(map);
         var errorReply = map.Text(ErrorReply) is { } e && PatternReader.Read(e, ErrorReply, ["code", "text"], _problems) is { } pattern
             ? new ErrorReplyRule(pattern)
@@ -60,14 +73,13 @@ internal sealed class DriverProfileReader
         var network = map.Has(NetworkAnalyser) ? sections.ReadNetworkAnalyser(map) : null;
         var spectrum = map.Has(SpectrumAnalyser) ? sections.ReadSpectrumAnalyser(map) : null;
         var generator = map.Has(SignalGenerator) ? sections.ReadSignalGenerator(map) : null;
-        CheckKindsAgainstSections(map, kinds);
 
         if (_problems.Any)
         {
             return null;
         }
 
-        return new DriverProfile(name!, description, adapter, kinds.Select(k => k.Kind).ToList(), framing, acknowledgement, timing,
+        return DriverProfile.ForRaw(name!, description, kindList, framing, acknowledgement, timing,
             identity!, limits, errorReply, _context.Words, onConnect, network, spectrum, generator);
     }
 
@@ -88,18 +100,35 @@ internal sealed class DriverProfileReader
         return text.Value.Trim();
     }
 
-    private string ReadAdapter(StrictMap map)
+    // Read before the profile's keys are checked, as the adapter decides which keys are allowed.
+    private AdapterKind ReadAdapter(YamlItem root)
     {
-        var text = map.Text(Adapter);
-        if (text is null || string.Equals(text.Value.Trim(), DriverProfile.RawAdapter, StringComparison.OrdinalIgnoreCase))
+        if (root is not YamlMap map || map.Entries.FirstOrDefault(e => e.Key.Value == Adapter) is not { Key: not null } entry)
         {
-            return DriverProfile.RawAdapter;
+            return AdapterKind.Raw;
         }
 
-        _problems.Add(text, string.Equals(text.Value.Trim(), "scpi", StringComparison.OrdinalIgnoreCase)
-            ? "\"adapter: scpi\" is not available yet: SCPI profiles arrive in a later version; this version reads \"adapter: raw\" profiles only"
-            : $"unknown value \"{text.Value}\" for \"{Adapter}\"; expected raw (scpi profiles arrive in a later version)");
-        return DriverProfile.RawAdapter;
+        const string expected = "expected raw (a line dialect described by the profile) or scpi (an IEEE 488.2 / SCPI instrument)";
+        if (entry.Value is not YamlText { IsNull: false } text || string.IsNullOrWhiteSpace(text.Value))
+        {
+            _problems.Add(entry.Value is YamlText ? entry.Key.Location : entry.Value.Location,
+                $"expected text for \"{Adapter}\", found {StrictMap.Describe(entry.Value)}; {expected}");
+            return AdapterKind.Raw;
+        }
+
+        var word = text.Value.Trim();
+        if (string.Equals(word, DriverProfile.RawAdapter, StringComparison.OrdinalIgnoreCase))
+        {
+            return AdapterKind.Raw;
+        }
+
+        if (string.Equals(word, DriverProfile.ScpiAdapter, StringComparison.OrdinalIgnoreCase))
+        {
+            return AdapterKind.Scpi;
+        }
+
+        _problems.Add(text, $"unknown value \"{text.Value}\" for \"{Adapter}\"; {expected}");
+        return AdapterKind.Raw;
     }
 
     private List<(InstrumentKind Kind, YamlItem Item)> ReadKinds(StrictMap map)
@@ -143,12 +172,13 @@ internal sealed class DriverProfileReader
         return kinds;
     }
 
-    private void CheckKindsAgainstSections(StrictMap map, List<(InstrumentKind Kind, YamlItem Item)> kinds)
+    // A raw profile needs each kind's section; a scpi profile may leave one out to keep every default.
+    private void CheckKindsAgainstSections(StrictMap map, List<(InstrumentKind Kind, YamlItem Item)> kinds, bool sectionRequired)
     {
         foreach (var (word, kind) in KindWords)
         {
             var listed = kinds.FirstOrDefault(k => k.Kind == kind);
-            if (listed.Item is not null && !map.Has(word))
+            if (listed.Item is not null && !map.Has(word) && sectionRequired)
             {
                 _problems.Add(listed.Item, $"\"{Kinds}\" lists {word}, but the profile has no \"{word}:\" section with its commands");
             }
@@ -182,16 +212,19 @@ internal sealed class DriverProfileReader
         return new BoolWords(words[0], words[1]);
     }
 
-    private (FramingOptions Framing, string? Acknowledgement) ReadFraming(StrictMap map)
+    // A scpi profile has no prompt, echo or acknowledgement, and its commands must end with a terminator.
+    private (FramingOptions Framing, string? Acknowledgement) ReadFraming(StrictMap map, AdapterKind adapter)
     {
         var defaults = new FramingOptions();
-        var f = map.Mapping(FramingKey, FramingKeys);
+        var f = adapter == AdapterKind.Scpi
+            ? ForeignKeys.Mapping(map, FramingKey, ScpiProfileKeys.FramingKeys, adapter, ForeignKeys.RawInScpiFraming)
+            : map.Mapping(FramingKey, FramingKeys);
         if (f is null)
         {
             return (defaults, null);
         }
 
-        var commandEnd = ReadTerminator(f, CommandEnd, allowEmpty: true) ?? defaults.WriteTerminator;
+        var commandEnd = ReadTerminator(f, CommandEnd, allowEmpty: adapter == AdapterKind.Raw) ?? defaults.WriteTerminator;
         var replyEnd = ReadTerminator(f, ReplyEndKey, allowEmpty: false) ?? defaults.ReadTerminator;
         string? prompt = null;
         if (f.Get(Prompt) is { } promptItem)
@@ -267,28 +300,48 @@ internal sealed class DriverProfileReader
         return null;
     }
 
-    private ProfileTiming ReadTiming(StrictMap map)
+    // A scpi profile's timeouts are those of its session (defaults 5 s and 60 s, at most 1 h); it has no settle delays.
+    private ProfileTiming ReadTiming(StrictMap map, AdapterKind adapter)
     {
-        var d = ProfileTiming.Default;
-        var t = map.Mapping(Timing, TimingKeys);
+        bool scpi = adapter == AdapterKind.Scpi;
+        var d = scpi ? ScpiTimingDefault : ProfileTiming.Default;
+        var t = scpi
+            ? ForeignKeys.Mapping(map, Timing, ScpiProfileKeys.TimingKeys, adapter, ForeignKeys.RawInScpiTiming)
+            : map.Mapping(Timing, TimingKeys);
         if (t is null)
         {
             return d;
         }
 
+        var max = scpi ? ScpiSessionOptions.MaxTimeout : (TimeSpan?)null;
         return new ProfileTiming(
-            Timeout(t, CommandTimeout) ?? d.CommandTimeout,
-            Timeout(t, SweepTimeout) ?? d.SweepTimeout,
+            Timeout(t, CommandTimeout, max) ?? d.CommandTimeout,
+            Timeout(t, SweepTimeout, max) ?? d.SweepTimeout,
             t.Parsed(SettleAfterSetting, DurationText.Parse) ?? d.SettleAfterSetting,
             t.Parsed(SettleBeforeRead, DurationText.Parse) ?? d.SettleBeforeRead);
     }
 
-    private TimeSpan? Timeout(StrictMap map, string key)
+    private static ProfileTiming ScpiTimingDefault
+    {
+        get
+        {
+            var session = new ScpiSessionOptions();
+            return new ProfileTiming(session.CommandTimeout, session.CompletionTimeout, TimeSpan.Zero, TimeSpan.Zero);
+        }
+    }
+
+    private TimeSpan? Timeout(StrictMap map, string key, TimeSpan? max)
     {
         var value = map.Parsed(key, DurationText.Parse);
         if (value is { } v && v <= TimeSpan.Zero)
         {
             _problems.Add(map.ValueLocation(key), $"\"{key}\" must be longer than 0 s");
+            return null;
+        }
+
+        if (value > max)
+        {
+            _problems.Add(map.ValueLocation(key), $"\"{key}\" must be at most {DurationText.Format(max.Value)}");
             return null;
         }
 

@@ -25,11 +25,19 @@ public sealed class ProfileInstrument : IInstrument
     /// <param name="profile">The dialect it speaks.</param>
     /// <param name="transport">The connection; opened by <see cref="ConnectAsync"/>, closed on disposal.</param>
     /// <param name="timeProvider">The clock for timeouts and settle delays; the system clock by default.</param>
+    /// <exception cref="ArgumentException">The profile is not an <c>adapter: raw</c> profile.</exception>
     public ProfileInstrument(string name, DriverProfile profile, ITransport transport, TimeProvider? timeProvider = null)
     {
         ArgumentException.ThrowIfNullOrWhiteSpace(name);
         ArgumentNullException.ThrowIfNull(profile);
         ArgumentNullException.ThrowIfNull(transport);
+        if (profile.AdapterKind != AdapterKind.Raw)
+        {
+            throw new ArgumentException(
+                $"The profile \"{profile.Name}\" is an adapter: {profile.Adapter} profile; a ProfileInstrument speaks adapter: raw profiles only (InstrumentAdapterFactory builds either).",
+                nameof(profile));
+        }
+
         _session = new ProfileSession(name, profile, transport, timeProvider ?? TimeProvider.System);
         _networkAnalyser = profile.NetworkAnalyser is { } na ? new ProfileNetworkAnalyser(_session, na) : null;
         _spectrumAnalyser = profile.SpectrumAnalyser is { } sa ? new ProfileSpectrumAnalyser(_session, sa) : null;

@@ -206,7 +206,7 @@ internal sealed class ProfileSession
 
     private async Task<InstrumentIdentity> IdentifyAsync(CancellationToken cancellationToken)
     {
-        var rule = Profile.Identity;
+        var rule = Profile.Identity ?? throw new InvalidOperationException($"{Name}: the profile has no identity rule; it is not a raw profile.");
         if (rule.Query is null)
         {
             return rule.Fixed;

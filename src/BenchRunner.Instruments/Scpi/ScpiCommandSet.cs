@@ -5,7 +5,8 @@ namespace BenchRunner.Instruments.Scpi;
 /// from a driver profile, checked by <see cref="Validate"/>. The defaults are SCPI-1999-style
 /// commands (<c>SENSe:FREQuency:STARt {hz}</c>, <c>INITiate:IMMediate</c>, <c>FORMat:DATA REAL,32</c>,
 /// <c>SOURce:POWer {dbm}</c>, ...); real instruments differ in their subsystem commands, so a
-/// profile names what its instrument understands. No capability is enabled by default.
+/// profile names what its instrument understands. No capability is enabled by default; a set
+/// with none enabled is refused unless <see cref="IdentificationOnly"/> says that is meant.
 /// Placeholders are typed: see <see cref="ScpiPlaceholder"/>.
 /// Do not change a command set after handing it to an instrument.
 /// </summary>
@@ -44,6 +45,14 @@ public sealed class ScpiCommandSet
     /// </summary>
     public string? ByteOrderCommand { get; init; } = "FORMat:BORDer {order}";
 
+    /// <summary>
+    /// Whether the set deliberately enables no capability: the instrument is then only connected
+    /// and identified (<c>*CLS</c>, <c>*IDN?</c>). Default false, so that a set with nothing enabled,
+    /// usually a forgotten <c>Enabled = true</c>, is reported by <see cref="Problems"/>; a set that
+    /// is identification-only and enables a capability as well is reported too.
+    /// </summary>
+    public bool IdentificationOnly { get; init; }
+
     /// <summary>True when a capability that fetches traces is enabled.</summary>
     public bool FetchesTraces => Network.Enabled || Spectrum.Enabled;
 
@@ -57,9 +66,14 @@ public sealed class ScpiCommandSet
             return problems;
         }
 
-        if (!Network.Enabled && !Spectrum.Enabled && !Generator.Enabled)
+        bool anyEnabled = Network.Enabled || Spectrum.Enabled || Generator.Enabled;
+        if (!anyEnabled && !IdentificationOnly)
         {
-            problems.Add("no capability is enabled; enable network, spectrum or generator");
+            problems.Add("no capability is enabled; enable network, spectrum or generator (or set identificationOnly when that is meant)");
+        }
+        else if (anyEnabled && IdentificationOnly)
+        {
+            problems.Add("identificationOnly: a capability is enabled as well; an identification-only set enables none");
         }
 
         if (Network.Enabled)

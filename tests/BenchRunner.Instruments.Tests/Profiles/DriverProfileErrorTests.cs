@@ -21,8 +21,7 @@ public class DriverProfileErrorTests
         { "kind twice", Replace(2, "kinds: [network-analyser, network-analyser]"), 2, 27, "\"network-analyser\" is listed twice in \"kinds\"" },
         { "kind without section", Replace(2, "kinds: [network-analyser, signal-generator]"), 2, 27, "\"kinds\" lists signal-generator, but the profile has no \"signal-generator:\" section" },
         { "section without kind", Replace(2, "kinds: [signal-generator]"), 4, 1, "the profile has a \"network-analyser:\" section, but \"kinds\" does not list network-analyser" },
-        { "scpi adapter", With("adapter: scpi"), 9, 10, "\"adapter: scpi\" is not available yet: SCPI profiles arrive in a later version" },
-        { "unknown adapter", With("adapter: serial"), 9, 10, "unknown value \"serial\" for \"adapter\"; expected raw" },
+        { "unknown adapter", With("adapter: serial"), 9, 10, "unknown value \"serial\" for \"adapter\"; expected raw (a line dialect described by the profile) or scpi" },
         { "unknown placeholder", Replace(5, "  setup: band {strt:hz} {stop:hz} {points}"), 5, 16, "unknown placeholder \"strt\" in \"setup\"; expected one of start, stop, centre, span, points" },
         { "unknown placeholder type", Replace(5, "  setup: band {start:hx} {stop:hz} {points}"), 5, 22, "unknown placeholder type \"hx\" in \"{start:hx}\"; expected one of hz, khz, mhz, ghz, dbm, db, int, bool" },
         { "placeholder type of another kind", Replace(5, "  setup: band {start:hz} {stop:hz} {points:hz}"), 5, 44, "\"{points:hz}\": points is a count, which is written as int, not hz" },
@@ -134,6 +133,6 @@ public class DriverProfileErrorTests
         var profile = DriverProfile.Parse(Lines(MinimalVna), Source);
 
         Assert.Equal(ReplyEnd.PointCount, profile.NetworkAnalyser!.Data.End);
-        Assert.Equal("workshop,test,0,0", profile.Identity.Fixed.ToString());
+        Assert.Equal("workshop,test,0,0", profile.Identity!.Fixed.ToString());
     }
 }

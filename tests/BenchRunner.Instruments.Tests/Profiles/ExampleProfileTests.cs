@@ -70,7 +70,7 @@ public class ExampleProfileTests
     [Fact]
     public void Identity_ExamplePattern_ExtractsTheFourFields()
     {
-        var identity = ExampleProfiles.Vna.Identity.FromReply(["benchrunner/sim-vna sn SIM-VNA-0001 fw 1.0"]);
+        var identity = ExampleProfiles.Vna.Identity!.FromReply(["benchrunner/sim-vna sn SIM-VNA-0001 fw 1.0"]);
 
         Assert.True(identity.Success, identity.Error);
         Assert.Equal(new("benchrunner", "sim-vna", "SIM-VNA-0001", "1.0"), identity.Value);

@@ -45,6 +45,20 @@ public class ScpiCommandSetTests
     }
 
     [Fact]
+    public void Problems_IdentificationOnly_AreNone()
+    {
+        Assert.Empty(new ScpiCommandSet { IdentificationOnly = true }.Problems());
+    }
+
+    [Fact]
+    public void Problems_IdentificationOnlyWithACapability_IsReported()
+    {
+        var commands = new ScpiCommandSet { IdentificationOnly = true, Generator = new() { Enabled = true } };
+
+        Assert.Contains(commands.Problems(), p => p.StartsWith("identificationOnly: a capability is enabled", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void Validate_SeveralProblems_ReportsEveryOneAtOnce()
     {
         var commands = new ScpiCommandSet
