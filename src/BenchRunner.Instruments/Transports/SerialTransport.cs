@@ -16,6 +16,8 @@ namespace BenchRunner.Instruments.Transports;
 /// <see cref="IsOpen"/> becomes false; <see cref="OpenAsync"/> may then be tried again.
 /// After such a loss the serial library services no further requests, so this class refuses
 /// them itself rather than letting them wait forever.</item>
+/// <item>DTR and RTS are set as the settings say, except on a device without modem-control
+/// lines (a pseudo-terminal), where they do not exist and are left alone.</item>
 /// <item>On Linux an exclusive advisory lock (flock) on the device node is held while the port
 /// is open, so a second BenchRunner connection to the same port fails at once.</item>
 /// </list>
@@ -74,11 +76,16 @@ public sealed class SerialTransport : ITransport
                     Handshake = Settings.Handshake,
                     ReadTimeout = SerialPort.InfiniteTimeout,
                     WriteTimeout = SerialPort.InfiniteTimeout,
-                    DtrEnable = Settings.Dtr,
                 };
-                if (!Settings.HandshakeUsesRts)
+
+                // Without modem-control lines (a pseudo-terminal) setting DTR or RTS fails the open.
+                if (portLock.HasModemLines)
                 {
-                    port.RtsEnable = Settings.Rts;
+                    port.DtrEnable = Settings.Dtr;
+                    if (!Settings.HandshakeUsesRts)
+                    {
+                        port.RtsEnable = Settings.Rts;
+                    }
                 }
 
                 port.Open();

@@ -21,6 +21,9 @@ internal static class Libc
 
     public const int TCSANOW = 0;
 
+    /// <summary>ioctl request: read the modem-control lines (asm-generic value, x86-64 and arm64).</summary>
+    public const nuint TIOCMGET = 0x5415;
+
     public const short POLLIN = 0x1;
     public const short POLLOUT = 0x4;
     public const short POLLERR = 0x8;
@@ -82,6 +85,9 @@ internal static class Libc
 
     [DllImport(Library, SetLastError = true)]
     public static extern int poll([In, Out] PollFd[] fds, nuint count, int timeoutMilliseconds);
+
+    [DllImport(Library, SetLastError = true)]
+    public static extern int ioctl(SafeFd fd, nuint request, out int value);
 
     [DllImport(Library, SetLastError = true)]
     public static extern int flock(SafeFd fd, int operation);

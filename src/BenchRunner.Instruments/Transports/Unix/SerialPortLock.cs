@@ -20,7 +20,17 @@ internal sealed class SerialPortLock : IDisposable
 
     private readonly SafeFd? _fd;
 
-    private SerialPortLock(SafeFd? fd) => _fd = fd;
+    private SerialPortLock(SafeFd? fd)
+    {
+        _fd = fd;
+        HasModemLines = fd is null || Libc.ioctl(fd, Libc.TIOCMGET, out _) == 0;
+    }
+
+    /// <summary>
+    /// Whether the device has modem-control lines (DTR, RTS). Pseudo-terminals and some USB
+    /// devices have none, and setting the lines on them fails. True where it cannot be checked.
+    /// </summary>
+    public bool HasModemLines { get; }
 
     /// <summary>
     /// Opens the device node and takes the lock; the open also tells precisely why a port cannot
