@@ -8,7 +8,8 @@ namespace BenchRunner.Instruments.Transports;
 /// (commands are short and each waits for its reply). Refused, reset and unreachable
 /// connections are transient <see cref="InstrumentException"/>s naming host:port; a connection
 /// not made within the connect timeout (measured by the injected <see cref="TimeProvider"/>) is an
-/// <see cref="InstrumentTimeoutException"/>. Reads return 0 when the instrument closes its end.
+/// <see cref="InstrumentTimeoutException"/>. Reads return 0 when the instrument closes its end;
+/// after a reset or other socket error <see cref="IsOpen"/> is false and the transport may be opened again.
 /// </summary>
 public sealed class TcpTransport : ITransport
 {
@@ -84,6 +85,7 @@ public sealed class TcpTransport : ITransport
         }
         catch (SocketException ex)
         {
+            Drop(socket);
             throw Failure("lost the connection to", ex);
         }
         catch (ObjectDisposedException ex)
@@ -103,6 +105,7 @@ public sealed class TcpTransport : ITransport
         }
         catch (SocketException ex)
         {
+            Drop(socket);
             throw Failure("lost the connection to", ex);
         }
         catch (ObjectDisposedException ex)
@@ -121,6 +124,15 @@ public sealed class TcpTransport : ITransport
 
     /// <inheritdoc/>
     public ValueTask DisposeAsync() => CloseAsync();
+
+    /// <summary>Forgets a broken socket, so that <see cref="IsOpen"/> is false and a reopen connects afresh.</summary>
+    private void Drop(Socket socket)
+    {
+        if (Interlocked.CompareExchange(ref _socket, null, socket) == socket)
+        {
+            socket.Dispose();
+        }
+    }
 
     private Socket CurrentSocket() =>
         _socket ?? throw new InvalidOperationException($"{Description} is not open.");

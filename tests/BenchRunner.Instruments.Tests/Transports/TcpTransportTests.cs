@@ -90,6 +90,7 @@ public class TcpTransportTests
         Assert.True(error.IsTransient);
         Assert.Contains($"127.0.0.1:{port}", error.Message);
         Assert.Contains("reset", error.Message);
+        Assert.False(tcp.IsOpen);
     }
 
     [Fact]
