@@ -59,13 +59,13 @@ public sealed class FramedConnection
         var bytes = new byte[Latin1.GetByteCount(command) + _writeTerminator.Length];
         int n = Latin1.GetBytes(command, bytes);
         _writeTerminator.CopyTo(bytes, n);
-        await _transport.WriteAsync(bytes, cancellationToken).ConfigureAwait(false);
+        await WriteAsync(bytes, cancellationToken).ConfigureAwait(false);
         _expectedEcho = _options.Echo ? command : null;
     }
 
     /// <summary>Writes raw bytes with no terminator (binary uploads).</summary>
     public async Task SendRawAsync(ReadOnlyMemory<byte> data, CancellationToken cancellationToken) =>
-        await _transport.WriteAsync(data, cancellationToken).ConfigureAwait(false);
+        await WriteAsync(data, cancellationToken).ConfigureAwait(false);
 
     /// <summary>Reads one reply line, without its terminator (and without a CR before it).</summary>
     /// <exception cref="InstrumentTimeoutException">No complete line within <paramref name="timeout"/>.</exception>
@@ -237,10 +237,35 @@ public sealed class FramedConnection
         }
     }
 
+    private async Task WriteAsync(ReadOnlyMemory<byte> data, CancellationToken cancellationToken)
+    {
+        try
+        {
+            await _transport.WriteAsync(data, cancellationToken).ConfigureAwait(false);
+        }
+        catch (IOException ex)
+        {
+            // A transport should raise InstrumentException itself; this catches one that does not.
+            throw new InstrumentException($"writing to {_transport.Description} failed: {ex.Message}", isTransient: true, ex);
+        }
+    }
+
     private async Task FillAsync(CancellationToken token)
     {
         EnsureCapacity(_count + 1);
-        int n = await _transport.ReadAsync(_buffer.AsMemory(_count), token).ConfigureAwait(false);
+        int n;
+        try
+        {
+            n = await _transport.ReadAsync(_buffer.AsMemory(_count), token).ConfigureAwait(false);
+        }
+        catch (IOException ex)
+        {
+            throw new InstrumentException($"reading from {_transport.Description} failed: {ex.Message}", isTransient: true, ex)
+            {
+                Reply = Latin1.GetString(_buffer, 0, Math.Min(_count, 512)),
+            };
+        }
+
         if (n == 0)
         {
             throw new FramingException(_count == 0

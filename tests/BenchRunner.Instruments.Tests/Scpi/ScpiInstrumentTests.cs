@@ -482,7 +482,7 @@ public class ScpiInstrumentTests
     [Fact]
     public void Constructor_InvalidCommandSet_ListsItsProblems()
     {
-        var (host, _) = Transports.InMemoryTransport.CreatePair();
+        var (host, _) = BenchRunner.Instruments.Transports.InMemoryTransport.CreatePair();
         var commands = new ScpiCommandSet { Generator = new() { Enabled = true, Output = "OUTPut:STATe", Level = null } };
 
         var error = Assert.Throws<ArgumentException>(() => new ScpiInstrument("sig", host, commands));

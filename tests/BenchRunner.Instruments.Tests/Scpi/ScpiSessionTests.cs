@@ -449,7 +449,7 @@ public class ScpiSessionTests
     [Fact]
     public void Constructor_InvalidOptions_ListsEveryProblem()
     {
-        var (_, host) = Transports.InMemoryTransport.CreatePair();
+        var (_, host) = BenchRunner.Instruments.Transports.InMemoryTransport.CreatePair();
         var options = new ScpiSessionOptions { CommandTimeout = TimeSpan.Zero, MaxErrorReads = 0, ErrorQuery = "SYSTem:ERRor" };
 
         var error = Assert.Throws<ArgumentException>(() => new ScpiSession("vna", host, options));
