@@ -9,6 +9,7 @@ public sealed partial class ResultStore
     /// <summary>Records the start of a run, with status running and the start time from the clock.</summary>
     /// <returns>The new run's id.</returns>
     /// <exception cref="ArgumentException">A required field is empty, optional text is blank, or the extra JSON is not valid.</exception>
+    /// <exception cref="ResultStoreException">The file refused the write (busy beyond <see cref="BusyTimeout"/>, full, damaged).</exception>
     public long StartRun(RunRecord run)
     {
         ArgumentNullException.ThrowIfNull(run);
@@ -178,6 +179,7 @@ public sealed partial class ResultStore
     /// <summary>Records the end of a running run: its final status, the end time from the clock, and an error message if any.</summary>
     /// <exception cref="ArgumentException">No such run, or <paramref name="status"/> is <see cref="RunStatus.Running"/>.</exception>
     /// <exception cref="InvalidOperationException">The run has already finished.</exception>
+    /// <exception cref="ResultStoreException">The file refused the write (busy beyond <see cref="BusyTimeout"/>, full, damaged).</exception>
     public void FinishRun(long runId, RunStatus status, string? errorMessage = null)
     {
         if (status == RunStatus.Running)

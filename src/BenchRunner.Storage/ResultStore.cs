@@ -78,8 +78,10 @@ public sealed partial class ResultStore : IDisposable, IAsyncDisposable
         SqliteConnection? connection = null;
         try
         {
-            storeLock = StoreLock.Take(fullPath, BusyTimeout);
             connection = Connect(fullPath, migrations);
+
+            // Taken only once the file is known to be a result file, so a refused file gets no lock file beside it.
+            storeLock = StoreLock.Take(fullPath, BusyTimeout);
             var store = new ResultStore(fullPath, connection, storeLock, time);
             if (storeLock.IsSole)
             {
