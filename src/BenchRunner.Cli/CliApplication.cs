@@ -2,6 +2,8 @@ using System.CommandLine;
 using System.Text.Json.Nodes;
 using BenchRunner.Cli.Commands;
 using BenchRunner.Core.Diagnostics;
+using BenchRunner.Instruments.Connections;
+using BenchRunner.Instruments.Errors;
 
 namespace BenchRunner.Cli;
 
@@ -9,9 +11,12 @@ namespace BenchRunner.Cli;
 public static class CliApplication
 {
     /// <summary>Parses <paramref name="args"/>, runs the verb and returns its exit code.</summary>
-    public static int Run(string[] args, CliConsole console)
+    public static int Run(string[] args, CliConsole console) => Run(args, console, () => new TransportFactory());
+
+    /// <summary>As <see cref="Run(string[], CliConsole)"/>, with the connection kinds <paramref name="transports"/> offers.</summary>
+    public static int Run(string[] args, CliConsole console, Func<TransportFactory> transports)
     {
-        var root = BuildRoot(console);
+        var root = BuildRoot(console, transports);
         // Bare "benchrunner" shows what it can do rather than an error.
         var parsed = root.Parse(args.Length == 0 ? ["--help"] : args);
         if (parsed.Errors.Count > 0)
@@ -44,6 +49,10 @@ public static class CliApplication
         {
             return Fail(console, args, ExitCodes.BadInput, ex.Message);
         }
+        catch (InstrumentException ex)
+        {
+            return Fail(console, args, ExitCodes.InstrumentFailure, ex.Message);
+        }
         catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
         {
             return Fail(console, args, ExitCodes.InstrumentFailure, ex.Message);
@@ -73,12 +82,13 @@ public static class CliApplication
         return exitCode;
     }
 
-    private static RootCommand BuildRoot(CliConsole console)
+    private static RootCommand BuildRoot(CliConsole console, Func<TransportFactory> transports)
     {
         var root = new RootCommand(
             "BenchRunner drives low-cost RF instruments, runs test plans against limit masks and logs every sweep.");
         root.Subcommands.Add(CheckCommand.Create(console));
         root.Subcommands.Add(PortsCommand.Create(console));
+        root.Subcommands.Add(IdentifyCommand.Create(console, transports));
         root.Subcommands.Add(ReplayCommand.Create(console));
         return root;
     }

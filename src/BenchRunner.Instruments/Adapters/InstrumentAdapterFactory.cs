@@ -1,4 +1,6 @@
 using BenchRunner.Instruments.Capabilities;
+using BenchRunner.Instruments.Capture;
+using BenchRunner.Instruments.Connections;
 using BenchRunner.Instruments.Profiles;
 using BenchRunner.Instruments.Scpi;
 using BenchRunner.Instruments.Transports;
@@ -39,5 +41,30 @@ public static class InstrumentAdapterFactory
             AdapterKind.Scpi => new ScpiInstrument(name, transport, profile.ScpiCommands!, profile.ScpiOptions, profile.Limits, time),
             _ => throw new ArgumentException($"The profile \"{profile.Name}\" has an adapter this version cannot build: {profile.AdapterKind}.", nameof(profile)),
         };
+    }
+
+    /// <summary>
+    /// Creates an unconnected instrument on the connection <paramref name="connection"/> describes,
+    /// recording every byte exchanged to <paramref name="recordPath"/> when it is given.
+    /// </summary>
+    /// <param name="name">The instrument's bench name.</param>
+    /// <param name="profile">The driver profile, or null for an identification-only SCPI instrument.</param>
+    /// <param name="connection">Where the instrument is.</param>
+    /// <param name="transports">Builds the transport for the connection's kind.</param>
+    /// <param name="recordPath">A new capture file to record the session into, or null.</param>
+    /// <param name="time">The clock for timeouts, settle delays and capture timestamps.</param>
+    /// <exception cref="IOException">The capture file exists already or cannot be written.</exception>
+    public static IInstrument Create(string name, DriverProfile? profile, ConnectionSpec connection, TransportFactory transports,
+        string? recordPath = null, TimeProvider? time = null)
+    {
+        ArgumentNullException.ThrowIfNull(connection);
+        ArgumentNullException.ThrowIfNull(transports);
+        var transport = transports.Create(connection);
+        if (recordPath is not null)
+        {
+            transport = RecordingTransport.ToFile(transport, recordPath, name, profile is null ? null : $"profile {profile.Name}", time);
+        }
+
+        return Create(name, profile, transport, time);
     }
 }

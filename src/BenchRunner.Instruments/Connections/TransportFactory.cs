@@ -1,25 +1,30 @@
+using BenchRunner.Instruments.Capture;
 using BenchRunner.Instruments.Errors;
 using BenchRunner.Instruments.Transports;
 
 namespace BenchRunner.Instruments.Connections;
 
 /// <summary>
-/// Creates the transport a <see cref="ConnectionSpec"/> describes. Serial and TCP are built in;
-/// other kinds (replay, the virtual bench) are plugged in by the layers that implement them
-/// through <see cref="Register"/>, so this class need not know them. Registering a built-in
+/// Creates the transport a <see cref="ConnectionSpec"/> describes. Serial, TCP and replay of a
+/// capture are built in; the virtual bench (<c>sim:</c>) is plugged in by the simulator layer
+/// through <see cref="Register"/>, so this class need not know it. Registering a built-in
 /// kind replaces it (tests use this to substitute a fake).
 /// </summary>
 public sealed class TransportFactory
 {
     private readonly Dictionary<string, Func<ConnectionSpec, ITransport>> _creators = new(StringComparer.Ordinal);
 
-    /// <summary>Creates a factory with the serial and TCP transports.</summary>
-    /// <param name="timeProvider">The clock for connect timeouts; the system clock by default.</param>
+    /// <summary>Creates a factory with the serial, TCP and replay transports.</summary>
+    /// <param name="timeProvider">The clock for connect timeouts and recorded-pace replay; the system clock by default.</param>
     public TransportFactory(TimeProvider? timeProvider = null)
     {
         var time = timeProvider ?? TimeProvider.System;
         _creators[ConnectionSpec.SerialScheme] = spec => new SerialTransport(spec.Serial!);
         _creators[ConnectionSpec.TcpScheme] = spec => new TcpTransport(spec.Tcp!, time);
+        _creators[ConnectionSpec.ReplayScheme] = spec => new ReplayTransport(
+            CaptureReader.Read(spec.Replay!.Path),
+            new ReplayOptions { Mode = spec.Replay.Mode, Pace = spec.Replay.Pace },
+            time);
     }
 
     /// <summary>The kinds a transport can be created for.</summary>

@@ -27,17 +27,24 @@ public class TransportFactoryTests
         Assert.Equal("127.0.0.1:5025", tcp.Settings.Endpoint);
     }
 
-    [Theory]
-    [InlineData("sim:vna")]
-    [InlineData("replay:lot7.capture")]
-    public void Create_KindNotRegistered_ThrowsPermanentErrorNamingTheKind(string text)
+    [Fact]
+    public void Create_KindNotRegistered_ThrowsPermanentErrorNamingTheKind()
     {
-        var spec = Spec(text);
+        var spec = Spec("sim:vna");
 
         var error = Assert.Throws<InstrumentException>(() => new TransportFactory().Create(spec));
 
         Assert.False(error.IsTransient);
         Assert.Contains($"{spec.Scheme} connections are not available", error.Message);
+    }
+
+    [Fact]
+    public void Create_ReplayOfAMissingCapture_IsBadInputNamingTheFile()
+    {
+        var error = Assert.Throws<BenchRunner.Core.Diagnostics.InputFormatException>(
+            () => new TransportFactory().Create(Spec("replay:no-such-lot7.capture?mode=lenient")));
+
+        Assert.Equal("no-such-lot7.capture: no such file", error.Message);
     }
 
     [Fact]
