@@ -125,8 +125,9 @@ public sealed class BenchVnaServer : IDeviceProtocol
         for (int i = 0; i < trace.Count; i++)
         {
             var hertz = (long)Math.Round(trace.Axis.Hertz[i], MidpointRounding.AwayFromZero);
-            var s = trace.Samples[i];
-            lines.Add(string.Create(CultureInfo.InvariantCulture, $"{hertz} {s.Real:0.000000E+00} {s.Imaginary:0.000000E+00}"));
+            // Adding 0.0 turns a negative zero into zero, so it is not printed as "-0.000000E+00".
+            var (re, im) = (trace.Samples[i].Real + 0.0, trace.Samples[i].Imaginary + 0.0);
+            lines.Add(string.Create(CultureInfo.InvariantCulture, $"{hertz} {re:0.000000E+00} {im:0.000000E+00}"));
         }
 
         return lines;
