@@ -61,7 +61,14 @@ public readonly struct Abcd : IEquatable<Abcd>
     /// </summary>
     /// <param name="referenceOhms">Z0 in ohms, finite and above zero.</param>
     /// <exception cref="ArgumentOutOfRangeException">Z0 is not finite and positive.</exception>
-    public SParameters ToSParameters(double referenceOhms)
+    public SParameters ToSParameters(double referenceOhms) => ToSParameters(referenceOhms, Determinant);
+
+    /// <summary>
+    /// <see cref="ToSParameters(double)"/> with AD − BC given: a chain's determinant is the product
+    /// of its links' determinants, which stays accurate deep in a stop band, where A·D and B·C are
+    /// huge and nearly equal and their difference would lose every digit.
+    /// </summary>
+    internal SParameters ToSParameters(double referenceOhms, Complex determinant)
     {
         Require.Positive(referenceOhms, nameof(referenceOhms));
         var bOverZ0 = B / referenceOhms;
@@ -70,7 +77,7 @@ public readonly struct Abcd : IEquatable<Abcd>
         return new SParameters(
             (A + bOverZ0 - cZ0 - D) / delta,
             2 / delta,
-            2 * (A * D - B * C) / delta,
+            2 * determinant / delta,
             (-A + bOverZ0 - cZ0 + D) / delta);
     }
 

@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using System.Numerics;
 
 namespace BenchRunner.Simulator.Circuits;
 
@@ -42,5 +43,34 @@ public sealed class Network : NetworkElement, ITwoPort
     }
 
     /// <inheritdoc/>
-    public SParameters Evaluate(double hertz, double referenceOhms) => AbcdAt(hertz).ToSParameters(referenceOhms);
+    public SParameters Evaluate(double hertz, double referenceOhms)
+    {
+        var (product, determinant) = ChainAt(hertz);
+        return product.ToSParameters(referenceOhms, determinant);
+    }
+
+    /// <summary>The product of the elements' matrices and the product of their determinants.</summary>
+    internal (Abcd Product, Complex Determinant) ChainAt(double hertz)
+    {
+        Require.Positive(hertz, nameof(hertz));
+        var product = Abcd.Identity;
+        var determinant = Complex.One;
+        foreach (var element in _elements)
+        {
+            if (element is Network inner)
+            {
+                var (innerProduct, innerDeterminant) = inner.ChainAt(hertz);
+                product = product.Cascade(innerProduct);
+                determinant *= innerDeterminant;
+            }
+            else
+            {
+                var link = element.AbcdAt(hertz);
+                product = product.Cascade(link);
+                determinant *= link.Determinant;
+            }
+        }
+
+        return (product, determinant);
+    }
 }
