@@ -7,7 +7,7 @@ namespace BenchRunner.Simulator.Devices;
 /// <summary>
 /// The workshop's ~20 dB LNA as a two-port for the network analyser. S21 comes from its
 /// <see cref="AmplifierModel"/>. The input looks like 75 Ω in series with an LC resonant at the
-/// model's centre (100 nH), the output like 33 Ω with an LC resonant at 140 MHz (150 nH), giving
+/// model's centre (100 nH), the output like 34 Ω with an LC resonant at 138 MHz (75 nH), giving
 /// about 13–15 dB of return loss across 130–145 MHz. Reverse isolation comes from a feedback
 /// capacitance: S12 is −35 dB at the centre, rising 6 dB per octave.
 /// </summary>
@@ -15,7 +15,7 @@ public sealed class LowNoiseAmplifier : ITwoPort
 {
     private const double ModelOhms = 50;
     private const double InputOhms = 75, InputHenries = 100e-9;
-    private const double OutputOhms = 33, OutputHenries = 150e-9, OutputResonanceHertz = 140e6;
+    private const double OutputOhms = 34, OutputHenries = 75e-9, OutputResonanceHertz = 138e6;
     private const double IsolationDbAtCentre = -35;
 
     private readonly double _inputFarads;
