@@ -1,3 +1,4 @@
+using System.Buffers;
 using System.Numerics;
 using System.Runtime.InteropServices;
 using BenchRunner.Core.Traces;
@@ -28,9 +29,17 @@ public static class TwoPortSweeps
         ArgumentNullException.ThrowIfNull(device);
         ArgumentNullException.ThrowIfNull(axis);
         ArgumentNullException.ThrowIfNull(quantities);
-        var points = new SParameters[axis.Count];
-        Evaluate(device, axis.Hertz.AsSpan(), referenceOhms, points);
-        return ToTraces(axis, points, quantities);
+        var buffer = ArrayPool<SParameters>.Shared.Rent(axis.Count);
+        try
+        {
+            var points = buffer.AsSpan(0, axis.Count);
+            Evaluate(device, axis.Hertz.AsSpan(), referenceOhms, points);
+            return ToTraces(axis, points, quantities);
+        }
+        finally
+        {
+            ArrayPool<SParameters>.Shared.Return(buffer);
+        }
     }
 
     /// <summary>Fills <paramref name="into"/> with the device's S-parameters at each frequency.</summary>

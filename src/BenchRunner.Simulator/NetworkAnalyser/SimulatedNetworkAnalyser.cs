@@ -1,3 +1,4 @@
+using System.Buffers;
 using System.Numerics;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;
@@ -171,15 +172,23 @@ public sealed class SimulatedNetworkAnalyser
         lock (_gate)
         {
             var device = _device is ITimeVaryingTwoPort changing ? changing.Snapshot() : _device;
-            var points = new SParameters[_axis.Count];
-            TwoPortSweeps.Evaluate(device, _axis.Hertz.AsSpan(), PortOhms, points);
-            if (_options.NoiseEnabled)
+            var buffer = ArrayPool<SParameters>.Shared.Rent(_axis.Count);
+            try
             {
-                AddNoise(points, NoiseScale(_settings));
-            }
+                var points = buffer.AsSpan(0, _axis.Count);
+                TwoPortSweeps.Evaluate(device, _axis.Hertz.AsSpan(), PortOhms, points);
+                if (_options.NoiseEnabled)
+                {
+                    AddNoise(points, NoiseScale(_settings));
+                }
 
-            Interlocked.Increment(ref _sweepCount);
-            return TwoPortSweeps.ToTraces(_axis, points, parameters);
+                Interlocked.Increment(ref _sweepCount);
+                return TwoPortSweeps.ToTraces(_axis, points, parameters);
+            }
+            finally
+            {
+                ArrayPool<SParameters>.Shared.Return(buffer);
+            }
         }
     }
 
