@@ -1,3 +1,5 @@
+using BenchRunner.Simulator.Devices;
+using BenchRunner.Simulator.NetworkAnalyser;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Simulator.Generator;
 using BenchRunner.Simulator.Spectrum;
@@ -30,19 +32,22 @@ public sealed class VirtualBench
     /// <param name="path">What lies between generator and analyser; a 0 dB through connection when null.</param>
     /// <param name="analyserOptions">The analyser's front end; defaults when null.</param>
     /// <param name="generatorOptions">The generator's harmonics and serial; defaults when null.</param>
+    /// <param name="networkAnalyserOptions">The network analyser's properties; the defaults of <see cref="NetworkAnalyserOptions"/> when null.</param>
     /// <exception cref="ArgumentException">Invalid options.</exception>
     public VirtualBench(
         int seed,
         Scene? scene = null,
         IRfPath? path = null,
         SpectrumAnalyserOptions? analyserOptions = null,
-        SignalGeneratorOptions? generatorOptions = null)
+        SignalGeneratorOptions? generatorOptions = null,
+        NetworkAnalyserOptions? networkAnalyserOptions = null)
     {
         _scene = scene ?? Scene.Empty;
         _path = path ?? FixedPath.Through;
         Generator = new SimulatedSignalGenerator(generatorOptions);
         SpectrumAnalyser = new SimulatedSpectrumAnalyser(seed, analyserOptions);
         SpectrumAnalyser.Connect(new BenchInput(this));
+        NetworkAnalyser = new SimulatedNetworkAnalyser(networkAnalyserOptions);
     }
 
     /// <summary>The signal generator.</summary>
@@ -51,7 +56,8 @@ public sealed class VirtualBench
     /// <summary>The spectrum analyser.</summary>
     public SimulatedSpectrumAnalyser SpectrumAnalyser { get; }
 
-    // The network analyser and the DUT it measures are attached here by the bench assembly.
+    /// <summary>The network analyser; its device under test is <see cref="SimulatedNetworkAnalyser.DeviceUnderTest"/> (open ports at first).</summary>
+    public SimulatedNetworkAnalyser NetworkAnalyser { get; }
 
     /// <summary>What lies between the generator's output and the analyser's input; may be swapped at any time (the next sweep sees it).</summary>
     public IRfPath Path
@@ -69,9 +75,15 @@ public sealed class VirtualBench
 
     /// <summary>
     /// The demo bench: the demo scene (<see cref="DemoScene"/>) and a 1 dB cable from generator to
-    /// analyser; the generator at 137.5 MHz, −30 dBm, output off.
+    /// spectrum analyser, the generator at 137.5 MHz, −30 dBm, output off, and the tuned
+    /// preselector board PSF-24-0001 on the network analyser.
     /// </summary>
-    /// <param name="seed">Seeds the analyser's noise.</param>
-    public static VirtualBench CreateDemo(int seed) =>
-        new(seed, DemoScene.Create(), FixedPath.Loss(Ratio.FromDecibels(1)));
+    /// <param name="seed">Seeds the analysers' noise.</param>
+    public static VirtualBench CreateDemo(int seed)
+    {
+        var bench = new VirtualBench(seed, DemoScene.Create(), FixedPath.Loss(Ratio.FromDecibels(1)),
+            networkAnalyserOptions: new NetworkAnalyserOptions { Seed = seed });
+        bench.NetworkAnalyser.DeviceUnderTest = Preselector137.TunedBoard();
+        return bench;
+    }
 }

@@ -1,7 +1,7 @@
-namespace BenchRunner.Instruments.Tests.Support;
+namespace BenchRunner.Tests.Shared;
 
 /// <summary>A fact that needs Linux (pseudo-terminals, flock); skipped elsewhere.</summary>
-public sealed class LinuxFactAttribute : FactAttribute
+internal sealed class LinuxFactAttribute : FactAttribute
 {
     public LinuxFactAttribute()
     {
