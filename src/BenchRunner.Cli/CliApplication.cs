@@ -4,6 +4,7 @@ using BenchRunner.Cli.Commands;
 using BenchRunner.Core.Diagnostics;
 using BenchRunner.Instruments.Connections;
 using BenchRunner.Instruments.Errors;
+using BenchRunner.Simulator.Endpoints;
 
 namespace BenchRunner.Cli;
 
@@ -11,7 +12,8 @@ namespace BenchRunner.Cli;
 public static class CliApplication
 {
     /// <summary>Parses <paramref name="args"/>, runs the verb and returns its exit code.</summary>
-    public static int Run(string[] args, CliConsole console) => Run(args, console, () => new TransportFactory());
+    public static int Run(string[] args, CliConsole console) =>
+        Run(args, console, () => SimulatorConnections.Register(new TransportFactory(), new VirtualBenchServers()));
 
     /// <summary>As <see cref="Run(string[], CliConsole)"/>, with the connection kinds <paramref name="transports"/> offers.</summary>
     public static int Run(string[] args, CliConsole console, Func<TransportFactory> transports)
@@ -90,6 +92,7 @@ public static class CliApplication
         root.Subcommands.Add(PortsCommand.Create(console));
         root.Subcommands.Add(IdentifyCommand.Create(console, transports));
         root.Subcommands.Add(ReplayCommand.Create(console));
+        root.Subcommands.Add(SimCommand.Create(console));
         return root;
     }
 }

@@ -43,9 +43,9 @@ public static class InstrumentProbe
     {
         var parts = new List<string>();
         if (limits.FrequencyRange is { } range) parts.Add($"{Display.Frequency(range.Start)} to {Display.Frequency(range.Stop)}");
-        if (limits.MaxInputLevel is { } input) parts.Add($"input at most {Display.Margin(input.Dbm).Replace(" dB", " dBm")}");
-        if (limits.MaxOutputLevel is { } output) parts.Add($"output at most {Display.Margin(output.Dbm).Replace(" dB", " dBm")}");
-        if (limits.MinOutputLevel is { } min) parts.Add($"output at least {Display.Margin(min.Dbm).Replace(" dB", " dBm")}");
+        if (limits.MaxInputLevel is { } input) parts.Add($"input at most {Display.Level(input.Dbm)}");
+        if (limits.MaxOutputLevel is { } output) parts.Add($"output at most {Display.Level(output.Dbm)}");
+        if (limits.MinOutputLevel is { } min) parts.Add($"output at least {Display.Level(min.Dbm)}");
         return parts.Count == 0 ? "none declared" : string.Join("; ", parts);
     }
 }

@@ -28,6 +28,9 @@ public static class Display
     /// <summary>A margin with an explicit sign, e.g. <c>+1.20 dB</c> or <c>-0.45 dB</c>.</summary>
     public static string Margin(double db) => $"{(db >= 0 ? "+" : "")}{db.ToString("0.00", Invariant)} dB";
 
+    /// <summary>An absolute level with an explicit sign and no needless decimals, e.g. <c>+10 dBm</c>, <c>-20.5 dBm</c>.</summary>
+    public static string Level(double dbm) => $"{(dbm > 0 ? "+" : "")}{dbm.ToString("0.##", Invariant)} dBm";
+
     /// <summary>A plain number with up to four significant decimals, e.g. a Q of <c>45.7</c>.</summary>
     public static string Number(double value) => value.ToString(Math.Abs(value) >= 100 ? "0.0" : "0.###", Invariant);
 
