@@ -20,7 +20,7 @@ public class ExampleProfileTests
         Assert.Equal(1048576, p.Framing.MaxMessageBytes);
         Assert.Equal(TimeSpan.FromSeconds(20), p.Timing.SweepTimeout);
         Assert.Equal(TimeSpan.FromMilliseconds(10), p.Timing.SettleAfterSetting);
-        Assert.Equal(Frequency.FromKilohertz(100), p.Limits.FrequencyRange!.Value.Start);
+        Assert.Equal(Frequency.FromMegahertz(1), p.Limits.FrequencyRange!.Value.Start);
         Assert.Equal(Frequency.FromGigahertz(1.5), p.Limits.FrequencyRange!.Value.Stop);
         Assert.Equal(Level.FromDbm(10), p.Limits.MaxInputLevel);
         Assert.Null(p.SpectrumAnalyser);

@@ -48,7 +48,7 @@ public class ScpiProfileTests
         Assert.Same(o.Framing, p.Framing);
         Assert.Null(o.Framing.Prompt);
         Assert.False(o.Framing.Echo);
-        Assert.Equal(Frequency.FromKilohertz(100), p.Limits.FrequencyRange!.Value.Start);
+        Assert.Equal(Frequency.FromMegahertz(1), p.Limits.FrequencyRange!.Value.Start);
         Assert.Equal(Frequency.FromGigahertz(1.5), p.Limits.FrequencyRange!.Value.Stop);
         Assert.Equal(Level.FromDbm(10), p.Limits.MaxInputLevel);
         o.Validate();
