@@ -91,14 +91,31 @@ public sealed class VirtualBenchEndToEndTests
         await stop.CancelAsync();
     }
 
-    [LinuxFact]
-    public async Task PseudoTerminal_RawNetworkAnalyser_ThroughTheRealSerialPort()
+    [Theory]
+    [InlineData(SimulatorDialect.Raw, "bench-vna.yaml")]
+    [InlineData(SimulatorDialect.Scpi, "bench-vna-scpi.yaml")]
+    public async Task Tcp_NetworkAnalyser_EitherDialect_MeasuresTheDemoBoard(SimulatorDialect dialect, string profile)
     {
         using var stop = new CancellationTokenSource();
         var servers = new VirtualBenchServers(seed: 7);
-        await using var endpoint = SimulatorPtyEndpoint.Start(servers.Host(SimulatedInstrument.NetworkAnalyser, SimulatorDialect.Raw), "vna", stop.Token);
+        await using var endpoint = SimulatorTcpEndpoint.Start(servers.Host(SimulatedInstrument.NetworkAnalyser, dialect), port: 0, stopping: stop.Token);
+        var transport = new TcpTransport(new TcpSettings { Host = "127.0.0.1", Port = endpoint.LocalEndpoint.Port });
+        await using var instrument = InstrumentAdapterFactory.Create("vna", Profile(profile), transport);
+
+        AssertTunedPreselector(await SweepS21Async(instrument));
+        await stop.CancelAsync();
+    }
+
+    [LinuxTheory]
+    [InlineData(SimulatorDialect.Raw, "bench-vna.yaml")]
+    [InlineData(SimulatorDialect.Scpi, "bench-vna-scpi.yaml")]
+    public async Task PseudoTerminal_NetworkAnalyser_EitherDialect_ThroughTheRealSerialPort(SimulatorDialect dialect, string profile)
+    {
+        using var stop = new CancellationTokenSource();
+        var servers = new VirtualBenchServers(seed: 7);
+        await using var endpoint = SimulatorPtyEndpoint.Start(servers.Host(SimulatedInstrument.NetworkAnalyser, dialect), "vna", stop.Token);
         var transport = new SerialTransport(new SerialSettings { PortPath = endpoint.Path });
-        await using var instrument = InstrumentAdapterFactory.Create("vna", Profile("bench-vna.yaml"), transport);
+        await using var instrument = InstrumentAdapterFactory.Create("vna", Profile(profile), transport);
 
         var s21 = await SweepS21Async(instrument);
 
