@@ -13,7 +13,7 @@ namespace BenchRunner.Instruments.Tests.Transports;
 /// </summary>
 public sealed class FaultInjectingTransportTests : IAsyncDisposable
 {
-    private static readonly TimeSpan ShortTimeout = TimeSpan.FromMilliseconds(300);
+    private static readonly TimeSpan ShortTimeout = TimeSpan.FromSeconds(1);
     private static readonly TimeSpan Slack = TimeSpan.FromSeconds(3);
 
     private readonly List<IAsyncDisposable> _cleanup = [];
