@@ -17,7 +17,7 @@ public static class IdentifyCommand
     {
         var connection = new Argument<string>("CONNECTION")
         {
-            Description = "Where the instrument is, e.g. serial:/dev/ttyUSB0?baud=115200, tcp:127.0.0.1:5025, replay:session.capture (docs/connections.md).",
+            Description = "Where the instrument is, e.g. serial:/dev/ttyUSB0?baud=115200, tcp:127.0.0.1:5025, replay:session.capture, or the virtual bench sim:vna, sim:sa, sim:gen (docs/connections.md).",
         };
         var profile = new Option<string?>("--profile")
         {
