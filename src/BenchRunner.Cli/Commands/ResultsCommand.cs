@@ -1,0 +1,87 @@
+using System.CommandLine;
+using BenchRunner.Cli.Results;
+using BenchRunner.Storage;
+
+namespace BenchRunner.Cli.Commands;
+
+/// <summary>
+/// <c>benchrunner results [--db FILE] [--run ID] [--dut SERIAL] [--lot LOT] [--limit N] [--json]</c>:
+/// lists stored runs, newest first, or shows one run with its checks and its figures sweep by sweep.
+/// Reads only; never creates a database.
+/// </summary>
+public static class ResultsCommand
+{
+    /// <summary>The result database used when <c>--db</c> is not given.</summary>
+    public const string DefaultDatabase = "benchrunner.db";
+
+    /// <summary>Creates the verb.</summary>
+    public static Command Create(CliConsole console)
+    {
+        var db = new Option<string>("--db") { Description = $"The result database. Default {DefaultDatabase} in the current folder.", HelpName = "FILE", DefaultValueFactory = _ => DefaultDatabase };
+        var run = new Option<long?>("--run") { Description = "Show this run in detail: instruments, checks, and the figures of every sweep.", HelpName = "ID" };
+        var dut = new Option<string?>("--dut") { Description = "Only runs of this board serial.", HelpName = "SERIAL" };
+        var lot = new Option<string?>("--lot") { Description = "Only runs of this lot.", HelpName = "LOT" };
+        var limit = new Option<int>("--limit") { Description = "At most this many runs in the list. Default 50.", HelpName = "N", DefaultValueFactory = _ => 50 };
+        var json = CommonOptions.Json();
+        var command = new Command("results", "List stored runs, or show one with its checks and figures sweep by sweep.")
+        {
+            db, run, dut, lot, limit, json,
+        };
+        command.SetAction(parsed =>
+        {
+            var path = parsed.GetRequiredValue(db);
+            if (!File.Exists(path))
+            {
+                throw new UsageException($"{path}: no result database there (runs write one with --db; the default is {DefaultDatabase}).");
+            }
+
+            using var store = OpenStore(path);
+            if (parsed.GetValue(run) is { } id)
+            {
+                var stored = store.GetRun(id) ?? throw new UsageException($"{path} has no run {id}; 'benchrunner results --db {path}' lists them.");
+                var (instruments, sweeps, figures, checks) = (store.GetInstruments(id), store.GetSweeps(id), store.GetFigures(id), store.GetChecks(id));
+                if (parsed.GetValue(json))
+                {
+                    ResultsJsonView.WriteRun(stored, instruments, sweeps, figures, checks, console.Out);
+                }
+                else
+                {
+                    ResultsTextView.WriteRun(stored, instruments, sweeps, figures, checks, console.Out);
+                }
+
+                return ExitCodes.Success;
+            }
+
+            var count = parsed.GetValue(limit);
+            if (count < 1)
+            {
+                throw new UsageException("--limit must be at least 1.");
+            }
+
+            var runs = store.ListRuns(new RunFilter { DutSerial = parsed.GetValue(dut), Lot = parsed.GetValue(lot), Limit = count });
+            if (parsed.GetValue(json))
+            {
+                ResultsJsonView.WriteList(runs, console.Out);
+            }
+            else
+            {
+                ResultsTextView.WriteList(runs, path, console.Out);
+            }
+
+            return ExitCodes.Success;
+        });
+        return command;
+    }
+
+    private static ResultStore OpenStore(string path)
+    {
+        try
+        {
+            return ResultStore.Open(path);
+        }
+        catch (ResultStoreException ex)
+        {
+            throw new UsageException(ex.Message);
+        }
+    }
+}
