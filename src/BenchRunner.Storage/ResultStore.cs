@@ -160,7 +160,7 @@ public sealed partial class ResultStore : IDisposable, IAsyncDisposable
                 throw new ResultStoreException($"{path}: the file cannot be put in WAL mode (journal mode stays \"{journal}\").");
             }
 
-            Scalar(connection, "PRAGMA synchronous = NORMAL");
+            Scalar(connection, "PRAGMA synchronous = FULL");
             Scalar(connection, $"PRAGMA busy_timeout = {((int)BusyTimeout.TotalMilliseconds).ToString(CultureInfo.InvariantCulture)}");
             SchemaMigrator.Migrate(connection, path, migrations);
             return connection;
