@@ -29,6 +29,20 @@ public static class MaskFile
     }
 
     /// <summary>
+    /// Reads a mask from an already-read YAML node, for files that hold a mask inline (test
+    /// plans). The node is read exactly as a mask file's root: same keys, same rules.
+    /// </summary>
+    /// <param name="node">The mask's mapping.</param>
+    /// <param name="sourceName">The name of the file holding the node, used in messages.</param>
+    /// <exception cref="InputFormatException">The node is not a valid mask.</exception>
+    public static LimitMask Read(Yaml.YamlItem node, string sourceName)
+    {
+        ArgumentNullException.ThrowIfNull(node);
+        ArgumentNullException.ThrowIfNull(sourceName);
+        return MaskFileReader.ReadTree(node, sourceName);
+    }
+
+    /// <summary>
     /// Writes <paramref name="mask"/> in the mask format. Reading the output back with
     /// <see cref="Parse"/> gives an equal mask: same corners to the last bit, same settings.
     /// </summary>

@@ -31,6 +31,8 @@ internal sealed class MaskFileReader
         return new MaskFileReader(source).ReadMask(root);
     }
 
+    public static LimitMask ReadTree(YamlItem root, string source) => new MaskFileReader(source).ReadMask(root);
+
     private LimitMask ReadMask(YamlItem root)
     {
         if (root is not YamlMap map)

@@ -1,0 +1,18 @@
+namespace BenchRunner.Execution.Bench;
+
+/// <summary>A bench as its bench file describes it: its instruments by role and the paths between them.</summary>
+/// <param name="Name">The bench's name.</param>
+/// <param name="Description">What the bench is, or null.</param>
+/// <param name="Instruments">The instruments, keyed by role name, in file order.</param>
+/// <param name="Paths">The declared signal paths, in file order.</param>
+/// <param name="Source">The bench file's name as used in messages.</param>
+public sealed record BenchDefinition(
+    string Name,
+    string? Description,
+    IReadOnlyDictionary<string, BenchInstrument> Instruments,
+    IReadOnlyList<SignalPath> Paths,
+    string Source)
+{
+    /// <summary>The paths that leave <paramref name="role"/>'s output.</summary>
+    public IEnumerable<SignalPath> PathsFrom(string role) => Paths.Where(p => p.From == role);
+}

@@ -1,0 +1,28 @@
+namespace BenchRunner.Execution.Bench;
+
+/// <summary>The words of the bench file format (docs/bench-format.md).</summary>
+internal static class BenchFileKeys
+{
+    public const string BenchName = "bench";
+    public const string Description = "description";
+    public const string InstrumentMap = "instruments";
+    public const string Paths = "paths";
+
+    public const string Kind = "kind";
+    public const string Adapter = "adapter";
+    public const string Profile = "profile";
+    public const string Connection = "connection";
+    public const string Limits = "limits";
+
+    public const string MaxInputLevel = "max-input-level";
+    public const string MaxOutputLevel = "max-output-level";
+
+    public const string Arrow = "->";
+
+    public static readonly IReadOnlyList<string> Top = [BenchName, Description, InstrumentMap, Paths];
+    public static readonly IReadOnlyList<string> InstrumentKeys = [Kind, Adapter, Profile, Connection, Limits, Description];
+    public static readonly IReadOnlyList<string> LimitKeys = [MaxInputLevel, MaxOutputLevel];
+
+    public static readonly IReadOnlyList<(string Word, BenchAdapter Value)> Adapters =
+        [("scpi", BenchAdapter.Scpi), ("profile", BenchAdapter.Profile)];
+}

@@ -1,0 +1,120 @@
+using System.Globalization;
+using BenchRunner.Core.Diagnostics;
+using BenchRunner.Core.Quantities;
+using BenchRunner.Execution.Bench;
+using BenchRunner.Execution.Plans;
+
+namespace BenchRunner.Execution.Validation;
+
+/// <summary>
+/// Checks a plan against a bench before anything is touched: every role the plan needs is on
+/// the bench with the right kind, and no generator setting can drive an analyser's input above
+/// its declared maximum through the declared paths (the safety pre-check).
+/// </summary>
+public static class PlanValidator
+{
+    /// <summary>The caution that ends every safety problem.</summary>
+    public const string Caution = "never exceed an input's maximum level: lower the level, or put an attenuator in the path";
+
+    /// <summary>
+    /// Reads the plan (and the bench, when <paramref name="benchPath"/> is given) and checks them
+    /// together; problems of both files are reported at once.
+    /// </summary>
+    /// <exception cref="InputFormatException">Any problem in either file or between them.</exception>
+    public static ValidatedPlan Load(string planPath, string? benchPath)
+    {
+        ArgumentException.ThrowIfNullOrEmpty(planPath);
+        var problems = new List<InputProblem>();
+        var plan = Collect(() => PlanFile.Load(planPath), problems);
+        var bench = benchPath is null ? null : Collect(() => BenchFile.Load(benchPath), problems);
+        if (plan is not null && bench is not null)
+        {
+            problems.AddRange(CheckAgainstBench(plan, bench));
+        }
+
+        if (problems.Count > 0)
+        {
+            throw new InputFormatException(problems);
+        }
+
+        return new ValidatedPlan(plan!, bench);
+    }
+
+    /// <summary>The problems between a plan and a bench, in plan order; empty when the plan can run there.</summary>
+    public static IReadOnlyList<InputProblem> CheckAgainstBench(TestPlan plan, BenchDefinition bench)
+    {
+        ArgumentNullException.ThrowIfNull(plan);
+        ArgumentNullException.ThrowIfNull(bench);
+        var problems = new List<InputProblem>();
+        foreach (var role in plan.Roles)
+        {
+            if (!bench.Instruments.TryGetValue(role.Role, out var instrument))
+            {
+                var has = bench.Instruments.Count == 0 ? "none" : string.Join(", ", bench.Instruments.Keys);
+                problems.Add(new(role.Location, $"the plan needs a {InstrumentKindWords.Of(role.Kind)} \"{role.Role}\", but the bench \"{bench.Name}\" ({bench.Source}) has no instrument of that name; it has {has}"));
+            }
+            else if (instrument.Kind != role.Kind)
+            {
+                problems.Add(new(role.Location, $"the plan needs \"{role.Role}\" to be a {InstrumentKindWords.Of(role.Kind)}, but on the bench \"{bench.Name}\" it is a {InstrumentKindWords.Of(instrument.Kind)} ({instrument.Location})"));
+            }
+        }
+
+        foreach (var step in plan.AllSteps().OfType<GeneratorSetup>())
+        {
+            if (step.Level is { } level && bench.Instruments.TryGetValue(step.Role, out var gen))
+            {
+                CheckLevel(step, level, gen, bench, problems);
+            }
+        }
+
+        return problems;
+    }
+
+    private static void CheckLevel(GeneratorSetup step, Level level, BenchInstrument gen, BenchDefinition bench, List<InputProblem> problems)
+    {
+        if (gen.MaxOutputLevel is { } maxOut && level > maxOut)
+        {
+            problems.Add(new(step.LevelLocation, $"{gen.Role} level {Signed(level)} is above its declared maximum output of {Signed(maxOut)} ({gen.Location})"));
+        }
+
+        foreach (var path in bench.PathsFrom(gen.Role))
+        {
+            if (!bench.Instruments.TryGetValue(path.To, out var receiver) || receiver.MaxInputLevel is not { } maxIn)
+            {
+                continue;
+            }
+
+            var reached = level.Plus(path.Gain);
+            if (reached > maxIn)
+            {
+                problems.Add(new(step.LevelLocation,
+                    $"{gen.Role} level {Signed(level)} through {path.Label} ({Signed(path.Gain)}) reaches {Signed(reached)} at {receiver.Role}, above its declared maximum input of {Signed(maxIn)}; {Caution}"));
+            }
+        }
+    }
+
+    private static T? Collect<T>(Func<T> read, List<InputProblem> problems)
+        where T : class
+    {
+        try
+        {
+            return read();
+        }
+        catch (InputFormatException ex)
+        {
+            problems.AddRange(ex.Problems);
+            return null;
+        }
+    }
+
+    private static string Signed(Level level) => Signed(level.Dbm, "dBm");
+
+    private static string Signed(Ratio ratio) => Signed(ratio.Decibels, "dB");
+
+    private static string Signed(double value, string unit)
+    {
+        var rounded = Math.Round(value, 3);
+        var text = rounded.ToString("0.###", CultureInfo.InvariantCulture);
+        return rounded > 0 ? $"+{text} {unit}" : $"{text} {unit}";
+    }
+}
