@@ -1,0 +1,10 @@
+namespace BenchRunner.Execution.Running;
+
+/// <summary>The result of one check of a run.</summary>
+/// <param name="Step">The step that made it.</param>
+/// <param name="Name">What was checked, e.g. <c>mask psf-137-passband on passband</c> or <c>center_hz of passband</c>.</param>
+/// <param name="Passed">Whether it passed.</param>
+/// <param name="Detail">The measured value and the limit, in words.</param>
+/// <param name="Margin">How far inside (positive) or outside (negative) the limit, when known.</param>
+/// <param name="MarginUnit">The margin's unit (dB, Hz, ...).</param>
+public sealed record CheckResult(string Step, string Name, bool Passed, string Detail, double? Margin, string? MarginUnit);

@@ -1,0 +1,21 @@
+namespace BenchRunner.Execution.Running;
+
+/// <summary>What is recorded with a run besides the plan itself.</summary>
+/// <param name="PlanText">The plan file's text (stored with its SHA-256).</param>
+/// <param name="BenchText">The bench file's text, if any.</param>
+/// <param name="SoftwareVersion">BenchRunner's version.</param>
+/// <param name="Host">The computer's name.</param>
+public sealed record RunContext(string PlanText, string? BenchText, string SoftwareVersion, string Host)
+{
+    /// <summary>Who ran it.</summary>
+    public string? Operator { get; init; }
+
+    /// <summary>The board's serial number.</summary>
+    public string? DutSerial { get; init; }
+
+    /// <summary>The lot the board belongs to.</summary>
+    public string? Lot { get; init; }
+
+    /// <summary>Whether this board was tested before.</summary>
+    public bool IsRetest { get; init; }
+}

@@ -1,0 +1,112 @@
+using BenchRunner.Core.Quantities;
+using BenchRunner.Execution.Bench;
+using BenchRunner.Execution.Plans;
+using BenchRunner.Execution.Running;
+using BenchRunner.Instruments.Connections;
+using BenchRunner.Simulator.Bench;
+using BenchRunner.Simulator.Devices;
+using BenchRunner.Simulator.Endpoints;
+using BenchRunner.Storage;
+
+namespace BenchRunner.Execution.Tests.Running;
+
+public sealed class PlanRunnerTests
+{
+    private static readonly TimeSpan Limit = TimeSpan.FromSeconds(60);
+
+    private sealed class Collector : IRunObserver
+    {
+        public List<RunEvent> Events { get; } = [];
+
+        public void OnEvent(RunEvent runEvent) => Events.Add(runEvent);
+    }
+
+    private static (PlanRunner Runner, VirtualBench Bench) Create(ResultStore? store)
+    {
+        var bench = VirtualBench.CreateDemo(seed: 3);
+        var transports = SimulatorConnections.Register(new TransportFactory(), new VirtualBenchServers(bench));
+        var definition = BenchFile.Load(RepositoryFiles.Example("bench-virtual.yaml"));
+        return (new PlanRunner(definition, transports, store), bench);
+    }
+
+    private static RunContext Context(string serial) => new("plan text", null, "0.1.0", "test-host") { DutSerial = serial, Lot = "PSF-24-L07" };
+
+    [Fact]
+    public async Task Run_TunedBoard_PassesAndCommitsEverySweepAndCheck()
+    {
+        using var dir = new TempDirectory();
+        using var store = ResultStore.Open(dir.PathOf("runs.db"));
+        var (runner, _) = Create(store);
+        var plan = PlanFile.Load(RepositoryFiles.Example("plans/psf-137-check.yaml"));
+        var observer = new Collector();
+
+        var outcome = await runner.RunAsync(plan, Context("PSF-24-0001"), observer, CancellationToken.None).WaitAsync(Limit);
+
+        Assert.Equal(RunStatus.Passed, outcome.Status);
+        Assert.All(outcome.Checks, c => Assert.True(c.Passed, c.Name + ": " + c.Detail));
+        Assert.Equal(4, outcome.Checks.Count);
+        var stored = store.GetRun(outcome.RunId!.Value)!;
+        Assert.Equal(RunStatus.Passed, stored.Status);
+        Assert.Equal(2, store.GetSweeps(stored.Id).Count);
+        Assert.Equal(4, store.GetChecks(stored.Id).Count);
+        Assert.Equal("SIM-VNA", Assert.Single(store.GetInstruments(stored.Id)).Model);
+        Assert.Contains(observer.Events, e => e is OperatorMessage);
+        Assert.Equal(2, observer.Events.OfType<SweepAcquired>().Count());
+    }
+
+    [Fact]
+    public async Task Run_DetunedBoard_FailsNamingTheFailingChecks()
+    {
+        var (runner, bench) = Create(store: null);
+        bench.NetworkAnalyser.DeviceUnderTest = Preselector137.DetunedBoard();
+        var plan = PlanFile.Load(RepositoryFiles.Example("plans/psf-137-check.yaml"));
+
+        var outcome = await runner.RunAsync(plan, Context("PSF-24-0002"), null, CancellationToken.None).WaitAsync(Limit);
+
+        Assert.Equal(RunStatus.Failed, outcome.Status);
+        Assert.Contains(outcome.Checks, c => !c.Passed && c.Name.StartsWith("mask psf-137-passband", StringComparison.Ordinal));
+        Assert.Contains(outcome.Checks, c => !c.Passed && c.Name == "center_hz of passband");
+        Assert.Null(outcome.RunId);
+    }
+
+    [Fact]
+    public async Task Run_GeneratorLevelThatWouldOverdriveTheAnalyser_IsRefusedBeforeAnythingIsSent()
+    {
+        var (runner, bench) = Create(store: null);
+        var plan = PlanFile.Parse("""
+            plan: overdrive
+            roles:
+              gen: signal-generator
+            steps:
+              - set-generator:
+                  role: gen
+                  frequency: 137.5 MHz
+                  level: +5 dBm
+                  output: on
+            """, "overdrive.yaml", RepositoryFiles.PathOf("docs/examples/plans"));
+
+        var outcome = await runner.RunAsync(plan, Context("PSF-24-0003"), null, CancellationToken.None).WaitAsync(Limit);
+
+        Assert.Equal(RunStatus.Error, outcome.Status);
+        Assert.Contains("gen level 5 dBm through gen -> sa (-1 dB) reaches 4 dBm at sa, above its declared maximum input of 0 dBm", outcome.Error);
+        Assert.Contains("Never exceed", outcome.Error);
+        Assert.False(bench.Generator.OutputOn);
+        Assert.NotEqual(Level.FromDbm(5), bench.Generator.Level);
+    }
+
+    [Fact]
+    public async Task Run_CancelledByTheOperator_IsStoppedAndKeepsTheRun()
+    {
+        using var dir = new TempDirectory();
+        using var store = ResultStore.Open(dir.PathOf("runs.db"));
+        var (runner, _) = Create(store);
+        var plan = PlanFile.Load(RepositoryFiles.Example("plans/psf-137-check.yaml"));
+        using var cts = new CancellationTokenSource();
+        await cts.CancelAsync();
+
+        var outcome = await runner.RunAsync(plan, Context("PSF-24-0001"), null, cts.Token).WaitAsync(Limit);
+
+        Assert.Equal(RunStatus.Stopped, outcome.Status);
+        Assert.Equal(RunStatus.Stopped, store.GetRun(outcome.RunId!.Value)!.Status);
+    }
+}
