@@ -92,6 +92,7 @@ public static class CliApplication
         root.Subcommands.Add(PortsCommand.Create(console));
         root.Subcommands.Add(IdentifyCommand.Create(console, transports));
         root.Subcommands.Add(ReplayCommand.Create(console));
+        root.Subcommands.Add(RunCommand.Create(console, transports));
         root.Subcommands.Add(ResultsCommand.Create(console));
         root.Subcommands.Add(SimCommand.Create(console));
         return root;

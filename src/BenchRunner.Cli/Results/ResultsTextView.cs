@@ -54,8 +54,12 @@ public static class ResultsTextView
             writer.WriteLine("  Checks");
             foreach (var c in checks)
             {
-                var margin = c.Record.Margin is { } m ? $", margin {m.ToString("0.###", CultureInfo.InvariantCulture)} {c.Record.MarginUnit}" : "";
+                var margin = c.Record.Margin is { } m ? $", margin {Display.Value(m, c.Record.MarginUnit ?? "")}" : "";
                 writer.WriteLine($"    {(c.Record.Passed ? "pass" : "FAIL")}  {c.Record.Name}{(c.Record.LimitText is null ? "" : $" ({c.Record.LimitText})")}{margin}");
+                if (c.Record.Message is not null)
+                {
+                    writer.WriteLine($"          {c.Record.Message}");
+                }
             }
         }
 

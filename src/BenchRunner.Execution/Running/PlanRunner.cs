@@ -305,7 +305,9 @@ public sealed class PlanRunner
 
     private static string Format(double value, string unit) => unit switch
     {
-        "Hz" => Frequency.FromHertz(Math.Abs(value)).ToString(),
+        "Hz" => Math.Abs(value) >= 1e6 ? $"{(value / 1e6).ToString("0.####", CultureInfo.InvariantCulture)} MHz"
+            : Math.Abs(value) >= 1e3 ? $"{(value / 1e3).ToString("0.###", CultureInfo.InvariantCulture)} kHz"
+            : $"{value.ToString("0.#", CultureInfo.InvariantCulture)} Hz",
         "" => value.ToString("0.###", CultureInfo.InvariantCulture),
         _ => $"{value.ToString("0.###", CultureInfo.InvariantCulture)} {unit}",
     };

@@ -1,0 +1,124 @@
+using System.CommandLine;
+using System.Text.Json;
+using System.Text.Json.Nodes;
+using BenchRunner.Cli.Output;
+using BenchRunner.Cli.Run;
+using BenchRunner.Execution.Running;
+using BenchRunner.Execution.Validation;
+using BenchRunner.Instruments.Connections;
+using BenchRunner.Storage;
+
+namespace BenchRunner.Cli.Commands;
+
+/// <summary>
+/// <c>benchrunner run PLAN --bench BENCH [--db FILE] [--dut SERIAL] [--lot LOT] [--operator NAME] [--json]</c>:
+/// validates the plan against the bench, runs it, records it, and gives the verdict.
+/// Exit 0 pass, 1 a check failed, 2 bad input, 3 instrument failure or refused setting, 130 stopped.
+/// </summary>
+public static class RunCommand
+{
+    /// <summary>Creates the verb.</summary>
+    public static Command Create(CliConsole console, Func<TransportFactory> transports)
+    {
+        var plan = new Argument<string>("PLAN") { Description = "The test plan (docs/plan-format.md)." };
+        var bench = new Option<string>("--bench")
+        {
+            Description = "The bench file naming the instruments (docs/bench-format.md); docs/examples/bench-virtual.yaml is the built-in virtual bench.",
+            HelpName = "BENCH",
+            Required = true,
+        };
+        var db = new Option<string>("--db") { Description = $"The result database (created if missing). Default {ResultsCommand.DefaultDatabase}.", HelpName = "FILE", DefaultValueFactory = _ => ResultsCommand.DefaultDatabase };
+        var dut = new Option<string?>("--dut") { Description = "The board's serial number, stored with the run.", HelpName = "SERIAL" };
+        var lot = new Option<string?>("--lot") { Description = "The lot the board belongs to.", HelpName = "LOT" };
+        var op = new Option<string?>("--operator") { Description = "Who runs the test.", HelpName = "NAME" };
+        var json = CommonOptions.Json();
+        var command = new Command("run", "Run a test plan on a bench, record every sweep and give the verdict. Exit 0 pass, 1 fail, 2 bad input, 3 instrument failure, 130 stopped.")
+        {
+            plan, bench, db, dut, lot, op, json,
+        };
+        command.SetAction(async (parsed, cancellationToken) =>
+        {
+            var planPath = parsed.GetRequiredValue(plan);
+            var benchPath = parsed.GetRequiredValue(bench);
+            var validated = PlanValidator.Load(planPath, benchPath);
+            var dbPath = parsed.GetRequiredValue(db);
+            using var store = OpenStore(dbPath);
+            var runner = new PlanRunner(validated.Bench!, transports(), store);
+            var context = new RunContext(File.ReadAllText(planPath), File.ReadAllText(benchPath), ThisVersion(), Environment.MachineName)
+            {
+                DutSerial = parsed.GetValue(dut),
+                Lot = parsed.GetValue(lot),
+                Operator = parsed.GetValue(op),
+            };
+            console.Error.WriteLine($"Running {validated.Plan.Name} on {validated.Bench!.Name}{(context.DutSerial is null ? "" : $" for {context.DutSerial}")}");
+            var outcome = await runner.RunAsync(validated.Plan, context, new RunProgressView(console.Error, console.UseColour), cancellationToken).ConfigureAwait(false);
+            if (parsed.GetValue(json))
+            {
+                WriteJson(outcome, dbPath, console.Out);
+            }
+            else
+            {
+                WriteText(outcome, dbPath, console.Out, console.UseColour);
+            }
+
+            return outcome.Status switch
+            {
+                RunStatus.Passed => ExitCodes.Success,
+                RunStatus.Failed => ExitCodes.CheckFailed,
+                RunStatus.Stopped => ExitCodes.Stopped,
+                _ => ExitCodes.InstrumentFailure,
+            };
+        });
+        return command;
+    }
+
+    /// <summary>The software version recorded with every run.</summary>
+    public static string ThisVersion() => typeof(RunCommand).Assembly.GetName().Version?.ToString(3) ?? "0";
+
+    private static ResultStore OpenStore(string path)
+    {
+        try
+        {
+            return ResultStore.Open(path);
+        }
+        catch (ResultStoreException ex)
+        {
+            throw new UsageException(ex.Message);
+        }
+    }
+
+    private static void WriteText(RunOutcome outcome, string db, TextWriter writer, bool colour)
+    {
+        var verdict = outcome.Status switch
+        {
+            RunStatus.Passed => Display.Colour("PASS", ConsoleColour.Green, colour),
+            RunStatus.Failed => Display.Colour("FAIL", ConsoleColour.Red, colour),
+            _ => Display.Colour(outcome.Status.ToString().ToUpperInvariant(), ConsoleColour.Yellow, colour),
+        };
+        writer.WriteLine($"Verdict  {verdict}{(outcome.Error is null ? "" : $": {outcome.Error}")}");
+        foreach (var check in outcome.Checks.Where(c => !c.Passed))
+        {
+            writer.WriteLine($"  failed: {check.Name}: {check.Detail}");
+        }
+
+        writer.WriteLine($"{outcome.Checks.Count(c => c.Passed)} of {outcome.Checks.Count} checks passed; run {outcome.RunId} stored in {db} (benchrunner results --db {db} --run {outcome.RunId}).");
+    }
+
+    private static void WriteJson(RunOutcome outcome, string db, TextWriter writer)
+    {
+        var document = new JsonObject
+        {
+            ["run_id"] = outcome.RunId,
+            ["database"] = db,
+            ["status"] = outcome.Status.ToString().ToLowerInvariant(),
+            ["passed"] = outcome.Status == RunStatus.Passed,
+            ["error"] = outcome.Error,
+            ["checks"] = new JsonArray(outcome.Checks.Select(c => (JsonNode?)new JsonObject
+            {
+                ["step"] = c.Step, ["name"] = c.Name, ["passed"] = c.Passed, ["detail"] = c.Detail,
+                ["margin"] = c.Margin, ["margin_unit"] = c.MarginUnit,
+            }).ToArray()),
+        };
+        writer.WriteLine(document.ToJsonString(new JsonSerializerOptions { WriteIndented = true }));
+    }
+}

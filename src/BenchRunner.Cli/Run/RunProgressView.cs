@@ -1,0 +1,31 @@
+using BenchRunner.Cli.Output;
+using BenchRunner.Execution.Running;
+
+namespace BenchRunner.Cli.Run;
+
+/// <summary>Shows a run's progress as it happens, one line per event, on standard error.</summary>
+public sealed class RunProgressView(TextWriter writer, bool colour) : IRunObserver
+{
+    /// <inheritdoc/>
+    public void OnEvent(RunEvent runEvent)
+    {
+        switch (runEvent)
+        {
+            case StepStarted step:
+                writer.WriteLine($"  - {step.Step}");
+                break;
+            case SweepAcquired sweep:
+                writer.WriteLine($"    {sweep.Role}: {sweep.TraceName} ({sweep.Trace.Quantity}, {sweep.Trace.Count} points) acquired and stored");
+                break;
+            case CheckCompleted check:
+                var verdict = check.Result.Passed
+                    ? Display.Colour("pass", ConsoleColour.Green, colour)
+                    : Display.Colour("FAIL", ConsoleColour.Red, colour);
+                writer.WriteLine($"    {verdict}  {check.Result.Name}: {check.Result.Detail}");
+                break;
+            case OperatorMessage message:
+                writer.WriteLine($"    operator: {message.Text}");
+                break;
+        }
+    }
+}
