@@ -89,6 +89,7 @@ public static class CliApplication
         var root = new RootCommand(
             "BenchRunner drives low-cost RF instruments, runs test plans against limit masks and logs every sweep.");
         root.Subcommands.Add(CheckCommand.Create(console));
+        root.Subcommands.Add(ValidateCommand.Create(console));
         root.Subcommands.Add(PortsCommand.Create(console));
         root.Subcommands.Add(IdentifyCommand.Create(console, transports));
         root.Subcommands.Add(ReplayCommand.Create(console));
