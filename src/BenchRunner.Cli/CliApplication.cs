@@ -88,6 +88,7 @@ public static class CliApplication
     {
         var root = new RootCommand(
             "BenchRunner drives low-cost RF instruments, runs test plans against limit masks and logs every sweep.");
+        root.Subcommands.Add(DemoCommand.Create(console));
         root.Subcommands.Add(CheckCommand.Create(console));
         root.Subcommands.Add(ValidateCommand.Create(console));
         root.Subcommands.Add(PortsCommand.Create(console));
