@@ -109,4 +109,31 @@ public sealed class PlanRunnerTests
         Assert.Equal(RunStatus.Stopped, outcome.Status);
         Assert.Equal(RunStatus.Stopped, store.GetRun(outcome.RunId!.Value)!.Status);
     }
+
+    [Theory]
+    [InlineData("times: 3", 3, RunStatus.Passed)]
+    [InlineData("until: { trace: passband, figures: { center_hz: { target: 137.5 MHz, tolerance: 0.3 MHz } } }\n      at-most: 4", 1, RunStatus.Passed)]
+    [InlineData("until: { trace: passband, figures: { center_hz: { target: 140 MHz, tolerance: 0.1 MHz } } }\n      at-most: 2", 2, RunStatus.Failed)]
+    public async Task Run_RepeatBlock_SweepsAsOftenAsItSays(string repeatHow, int sweeps, RunStatus expected)
+    {
+        using var dir = new TempDirectory();
+        using var store = ResultStore.Open(dir.PathOf("runs.db"));
+        var (runner, _) = Create(store);
+        var plan = PlanFile.Parse($$"""
+            plan: repeat
+            roles:
+              vna: network-analyser
+            steps:
+              - set-network-analyser: { role: vna, start: 127.5 MHz, stop: 147.5 MHz, points: 201 }
+              - repeat:
+                  {{repeatHow}}
+                  steps:
+                    - sweep: { role: vna, traces: { S21: passband } }
+            """, "repeat.yaml", dir.Path);
+
+        var outcome = await runner.RunAsync(plan, Context("PSF-24-0001"), null, CancellationToken.None).WaitAsync(Limit);
+
+        Assert.Equal(expected, outcome.Status);
+        Assert.Equal(sweeps, store.GetSweeps(outcome.RunId!.Value).Count);
+    }
 }
