@@ -1,3 +1,4 @@
+using BenchRunner.Cli.Results;
 using System.CommandLine;
 using System.Text.Json;
 using System.Text.Json.Nodes;
@@ -49,7 +50,7 @@ public static class DemoCommand
             var validated = PlanValidator.Load(files.Plan, files.Bench);
             var bench = VirtualBench.CreateDemo(parsed.GetValue(seed));
             var transports = SimulatorConnections.Register(new TransportFactory(), new VirtualBenchServers(bench), cancellationToken);
-            using var store = ResultStore.Open(dbPath);
+            using var store = ResultStoreOpener.Open(dbPath);
             var runner = new PlanRunner(validated.Bench!, transports, store);
 
             report.WriteLine($"BenchRunner demo: the virtual bench tests two 137 MHz preselector boards against the plan \"{validated.Plan.Name}\".");

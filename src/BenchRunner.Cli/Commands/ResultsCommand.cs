@@ -35,7 +35,7 @@ public static class ResultsCommand
                 throw new UsageException($"{path}: no result database there (runs write one with --db; the default is {DefaultDatabase}).");
             }
 
-            using var store = OpenStore(path);
+            using var store = ResultStoreOpener.Open(path);
             if (parsed.GetValue(run) is { } id)
             {
                 var stored = store.GetRun(id) ?? throw new UsageException($"{path} has no run {id}; 'benchrunner results --db {path}' lists them.");
@@ -73,15 +73,4 @@ public static class ResultsCommand
         return command;
     }
 
-    private static ResultStore OpenStore(string path)
-    {
-        try
-        {
-            return ResultStore.Open(path);
-        }
-        catch (ResultStoreException ex)
-        {
-            throw new UsageException(ex.Message);
-        }
-    }
 }

@@ -1,3 +1,4 @@
+using BenchRunner.Cli.Results;
 using System.CommandLine;
 using System.Text.Json;
 using System.Text.Json.Nodes;
@@ -42,7 +43,7 @@ public static class RunCommand
             var benchPath = parsed.GetRequiredValue(bench);
             var validated = PlanValidator.Load(planPath, benchPath);
             var dbPath = parsed.GetRequiredValue(db);
-            using var store = OpenStore(dbPath);
+            using var store = ResultStoreOpener.Open(dbPath);
             var runner = new PlanRunner(validated.Bench!, transports(), store);
             var context = new RunContext(File.ReadAllText(planPath), File.ReadAllText(benchPath), ThisVersion(), Environment.MachineName)
             {
@@ -75,17 +76,6 @@ public static class RunCommand
     /// <summary>The software version recorded with every run.</summary>
     public static string ThisVersion() => typeof(RunCommand).Assembly.GetName().Version?.ToString(3) ?? "0";
 
-    private static ResultStore OpenStore(string path)
-    {
-        try
-        {
-            return ResultStore.Open(path);
-        }
-        catch (ResultStoreException ex)
-        {
-            throw new UsageException(ex.Message);
-        }
-    }
 
     private static void WriteText(RunOutcome outcome, string db, TextWriter writer, bool colour)
     {

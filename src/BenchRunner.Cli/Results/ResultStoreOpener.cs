@@ -1,0 +1,21 @@
+using BenchRunner.Storage;
+
+namespace BenchRunner.Cli.Results;
+
+/// <summary>Opens the result database for a verb; a file that is not one (or is newer) is bad input.</summary>
+public static class ResultStoreOpener
+{
+    /// <summary>Opens (or creates) the store at <paramref name="path"/>.</summary>
+    /// <exception cref="UsageException">Not a result database, a newer schema, or a missing folder.</exception>
+    public static ResultStore Open(string path)
+    {
+        try
+        {
+            return ResultStore.Open(path);
+        }
+        catch (ResultStoreException ex)
+        {
+            throw new UsageException(ex.Message);
+        }
+    }
+}
