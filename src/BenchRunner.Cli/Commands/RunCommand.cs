@@ -1,8 +1,8 @@
-using BenchRunner.Cli.Results;
 using System.CommandLine;
-using System.Text.Json;
 using System.Text.Json.Nodes;
+using System.Text.Json;
 using BenchRunner.Cli.Output;
+using BenchRunner.Cli.Results;
 using BenchRunner.Cli.Run;
 using BenchRunner.Execution.Running;
 using BenchRunner.Execution.Validation;
