@@ -78,6 +78,41 @@ internal static partial class BenchDialect
         return (double)value;
     }
 
+    /// <summary>
+    /// Answers one command line the way every bench dialect server does: an empty line gets no
+    /// answer; otherwise <paramref name="run"/>'s reply lines, or the <c>err</c> line of a refused
+    /// command (a value out of range when the model refuses it), with the echo and prompt the
+    /// dialect uses.
+    /// </summary>
+    public static byte[] Answer(string line, Func<string[], IReadOnlyList<string>> run, bool echo, string? prompt)
+    {
+        ArgumentNullException.ThrowIfNull(line);
+        var words = Words(line);
+        if (words.Length == 0)
+        {
+            return [];
+        }
+
+        IReadOnlyList<string> reply;
+        try
+        {
+            reply = run(words);
+        }
+        catch (BenchDialectException ex)
+        {
+            reply = [ErrorLine(ex.Error)];
+        }
+        catch (ArgumentException)
+        {
+            reply = [ErrorLine(BenchDialectError.ValueOutOfRange)];
+        }
+
+        return Reply(echo ? line : null, reply, prompt);
+    }
+
+    /// <summary>The answer to a line longer than the host accepts: an unknown-command error.</summary>
+    public static byte[] AnswerOverlong(string? prompt) => Reply(null, [ErrorLine(BenchDialectError.UnknownCommand)], prompt);
+
     /// <summary>The bytes of a reply: the echo (if any), each line ended with CR LF, then the prompt (if any).</summary>
     public static byte[] Reply(string? echo, IReadOnlyList<string> lines, string? prompt)
     {

@@ -28,35 +28,10 @@ public sealed class BenchGenServer : IDeviceProtocol
     public CommandLineEnd LineEnd => CommandLineEnd.CarriageReturnOrLineFeed;
 
     /// <inheritdoc/>
-    public byte[] Handle(string line)
-    {
-        ArgumentNullException.ThrowIfNull(line);
-        var words = BenchDialect.Words(line);
-        if (words.Length == 0)
-        {
-            return [];
-        }
-
-        string reply;
-        try
-        {
-            reply = Run(words);
-        }
-        catch (BenchDialectException ex)
-        {
-            reply = BenchDialect.ErrorLine(ex.Error);
-        }
-        catch (ArgumentException)
-        {
-            reply = BenchDialect.ErrorLine(BenchDialectError.ValueOutOfRange);
-        }
-
-        return BenchDialect.Reply(null, [reply], null);
-    }
+    public byte[] Handle(string line) => BenchDialect.Answer(line, words => [Run(words)], echo: false, prompt: null);
 
     /// <inheritdoc/>
-    public byte[] HandleOverlongLine(int limitBytes) =>
-        BenchDialect.Reply(null, [BenchDialect.ErrorLine(BenchDialectError.UnknownCommand)], null);
+    public byte[] HandleOverlongLine(int limitBytes) => BenchDialect.AnswerOverlong(prompt: null);
 
     private string Run(string[] words)
     {

@@ -32,35 +32,10 @@ public sealed class BenchSaServer : IDeviceProtocol
     public CommandLineEnd LineEnd => CommandLineEnd.LineFeed;
 
     /// <inheritdoc/>
-    public byte[] Handle(string line)
-    {
-        ArgumentNullException.ThrowIfNull(line);
-        var words = BenchDialect.Words(line);
-        if (words.Length == 0)
-        {
-            return [];
-        }
-
-        IReadOnlyList<string> reply;
-        try
-        {
-            reply = Run(words);
-        }
-        catch (BenchDialectException ex)
-        {
-            reply = [BenchDialect.ErrorLine(ex.Error)];
-        }
-        catch (ArgumentException)
-        {
-            reply = [BenchDialect.ErrorLine(BenchDialectError.ValueOutOfRange)];
-        }
-
-        return BenchDialect.Reply(null, reply, Prompt);
-    }
+    public byte[] Handle(string line) => BenchDialect.Answer(line, Run, echo: false, Prompt);
 
     /// <inheritdoc/>
-    public byte[] HandleOverlongLine(int limitBytes) =>
-        BenchDialect.Reply(null, [BenchDialect.ErrorLine(BenchDialectError.UnknownCommand)], Prompt);
+    public byte[] HandleOverlongLine(int limitBytes) => BenchDialect.AnswerOverlong(Prompt);
 
     private IReadOnlyList<string> Run(string[] words)
     {
