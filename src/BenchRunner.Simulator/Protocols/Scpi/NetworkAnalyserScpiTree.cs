@@ -36,11 +36,7 @@ public sealed class NetworkAnalyserScpiTree
 
     private void Declare(ScpiCommandTree tree)
     {
-        tree.Query("*IDN?", c =>
-            {
-                c.ExpectParameters(0, 0);
-                return ScpiResponse.Text(_device.Identity.ToString());
-            })
+        tree.Identification(_device.Identity)
             .Command("*RST", c =>
             {
                 c.ExpectParameters(0, 0);

@@ -1,3 +1,4 @@
+using BenchRunner.Instruments.Capabilities;
 namespace BenchRunner.Simulator.Protocols.Scpi;
 
 /// <summary>
@@ -44,6 +45,18 @@ public sealed class ScpiCommandTree
         ArgumentNullException.ThrowIfNull(handler);
         Declare(header, query: true, handler);
         return this;
+    }
+
+    /// <summary>Declares <c>*IDN?</c>, answered with the four identity fields (IEEE 488.2 §10.14).</summary>
+    /// <returns>This tree, for chaining.</returns>
+    public ScpiCommandTree Identification(InstrumentIdentity identity)
+    {
+        ArgumentNullException.ThrowIfNull(identity);
+        return Query("*IDN?", c =>
+        {
+            c.ExpectParameters(0, 0);
+            return ScpiResponse.Text(identity.ToString());
+        });
     }
 
     /// <summary>The handler of a common command, or null.</summary>

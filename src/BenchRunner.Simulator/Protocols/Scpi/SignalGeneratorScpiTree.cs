@@ -15,11 +15,7 @@ public static class SignalGeneratorScpiTree
     {
         ArgumentNullException.ThrowIfNull(device);
         var tree = new ScpiCommandTree()
-            .Query("*IDN?", c =>
-            {
-                c.ExpectParameters(0, 0);
-                return ScpiResponse.Text(device.Identity.ToString());
-            })
+            .Identification(device.Identity)
             .Command("*RST", c =>
             {
                 c.ExpectParameters(0, 0);
