@@ -16,6 +16,9 @@ public sealed partial class PlanRunner
     /// <summary>The suffix of the trace name under which the raised-attenuation sweep is stored.</summary>
     public const string RaisedTraceSuffix = "-raised";
 
+    /// <summary>The most undecided lines named in a check's one-line detail; all are in its lines.</summary>
+    private const int ListedAtMost = 4;
+
     private async Task CheckOverloadAsync(OverloadCheckStep step, string name, RunState state, CancellationToken cancellationToken)
     {
         var analyser = Capability<ISpectrumAnalyser>(state, step.Role);
@@ -81,12 +84,16 @@ public sealed partial class PlanRunner
         for (int i = 0; i < verdict.Peaks.Count; i++)
         {
             var peak = verdict.Peaks[i];
+            // A carrier outside the span has no measured level, so nothing can be given relative to it.
+            var dbc = labels[i].CarrierIndex is { } k && InSpan(lower, step.Carriers[k]) ? labels[i].RelativeDbc : null;
             judged.Add(new JudgedLine(peak.Frequency, peak.LevelAtLowerDbm, peak.ChangeDb, peak.Class,
-                carriers.Count == 0 ? "unidentified" : labels[i].Label, labels[i].RelativeDbc, relied?.Contains(i) ?? true));
+                carriers.Count == 0 ? "unidentified" : labels[i].Label, dbc, relied?.Contains(i) ?? true));
         }
 
         return judged;
     }
+
+    private static bool InSpan(PowerTrace trace, Frequency frequency) => frequency >= trace.Axis.Start && frequency <= trace.Axis.Stop;
 
     /// <summary>The carrier's level: the line found near it, or else the trace's level at the point nearest to it.</summary>
     private static double LevelNear(PowerTrace trace, IReadOnlyList<PeakPoint> peaks, Frequency frequency, Frequency tolerance)
@@ -166,7 +173,13 @@ public sealed partial class PlanRunner
 
         if (undecided.Count > 0)
         {
-            parts.Add($"undecided: {string.Join(", ", undecided.Select(Brief))}");
+            var more = undecided.Count > ListedAtMost ? $" and {undecided.Count - ListedAtMost} more" : "";
+            parts.Add($"undecided: {string.Join(", ", undecided.Take(ListedAtMost).Select(Brief))}{more}");
+        }
+
+        if (undecided.Any(l => l.Relied && l.Class == OverloadClass.HiddenByNoise))
+        {
+            parts.Add("a line near the raised noise floor cannot be judged: lower the RBW, or judge only lines well above the floor");
         }
 
         if (missing.Count > 0)
