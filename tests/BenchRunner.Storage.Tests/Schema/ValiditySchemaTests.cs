@@ -56,6 +56,7 @@ public sealed class ValiditySchemaTests : IDisposable
         var runId = store.StartRun(Samples.Run());
         var sweep = new SweepRecord("output sweep", Samples.Spectrum())
         {
+            Figures = [new BenchRunner.Core.Figures.NamedFigure("peak_dbm", "peak level", -20, "dBm", null)],
             Compensation = "compensated: probe 4.7 kOhm into 50 Ohm (39.554 dB)",
             Flags = SweepFlags.Overloaded,
         };
@@ -75,6 +76,7 @@ public sealed class ValiditySchemaTests : IDisposable
         Assert.Equal(new object?[] { "overload", 0L, 1L }, StoreFile.Query(path, "SELECT kind, on_overloaded_trace, sweep_overloaded FROM run_checks ORDER BY check_id")[0]);
         Assert.Equal(new object?[] { "figure_limit", 1L, 1L }, StoreFile.Query(path, "SELECT kind, on_overloaded_trace, sweep_overloaded FROM run_checks ORDER BY check_id")[1]);
         Assert.Equal(sweep.Compensation, StoreFile.Scalar(path, "SELECT compensation FROM run_sweeps"));
+        Assert.Equal(new object?[] { sweep.Compensation, 1L }, StoreFile.Query(path, "SELECT compensation, sweep_overloaded FROM run_figures WHERE key = 'peak_dbm'").Single());
     }
 
     [Fact]

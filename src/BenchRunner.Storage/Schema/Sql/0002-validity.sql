@@ -37,7 +37,29 @@ ALTER TABLE checks_v2 RENAME TO checks;
 CREATE INDEX checks_by_run ON checks (run_id);
 CREATE INDEX checks_by_sweep ON checks (sweep_id);
 
--- run_sweeps gains the compensation column.
+-- run_figures and run_sweeps gain the compensation column, so every figure says what its levels carry.
+DROP VIEW run_figures;
+CREATE VIEW run_figures AS
+SELECT r.id AS run_id,
+       r.dut_serial,
+       r.lot,
+       r.status AS run_status,
+       s.id AS sweep_id,
+       s.seq,
+       s.step_name,
+       s.trace_name,
+       s.quantity,
+       s.acquired_utc,
+       f.key,
+       f.value,
+       f.unit,
+       f.reason,
+       s.compensation,
+       (s.flags & 1) <> 0 AS sweep_overloaded
+FROM figures f
+JOIN sweeps s ON s.id = f.sweep_id
+JOIN runs r ON r.id = f.run_id;
+
 DROP VIEW run_sweeps;
 CREATE VIEW run_sweeps AS
 SELECT s.run_id,
