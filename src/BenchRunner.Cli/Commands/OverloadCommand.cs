@@ -41,17 +41,17 @@ public static class OverloadCommand
         var span = new Option<string?>("--span") { Description = "The span's width, e.g. 4MHz (with --centre).", HelpName = "FREQ" };
         var start = new Option<string?>("--start") { Description = "The span's lower edge (with --stop), instead of --centre and --span.", HelpName = "FREQ" };
         var stop = new Option<string?>("--stop") { Description = "The span's upper edge (with --start).", HelpName = "FREQ" };
-        var rbw = new Option<string>("--rbw") { Description = "Resolution bandwidth. Default 10kHz.", HelpName = "FREQ", DefaultValueFactory = _ => "10kHz" };
-        var attenuation = new Option<string>("--attenuation") { Description = "Input attenuation of the first sweep. Default 0dB (the most sensitive, and the most easily overloaded).", HelpName = "DB", DefaultValueFactory = _ => "0dB" };
-        var raiseBy = new Option<string>("--raise-by") { Description = "How much more attenuation the second sweep has. Default 10dB.", HelpName = "DB", DefaultValueFactory = _ => "10dB" };
-        var threshold = new Option<string>("--threshold") { Description = "Judge lines above this level. Default -90dBm.", HelpName = "DBM", DefaultValueFactory = _ => "-90dBm" };
-        var tolerance = new Option<string>("--tolerance") { Description = "How far a real line may move, ± dB. Default 1dB.", HelpName = "DB", DefaultValueFactory = _ => "1dB" };
+        var rbw = new Option<string>("--rbw") { Description = "Resolution bandwidth.", HelpName = "FREQ", DefaultValueFactory = _ => "10kHz" };
+        var attenuation = new Option<string>("--attenuation") { Description = "Input attenuation of the first sweep (0dB is the most sensitive, and the most easily overloaded).", HelpName = "DB", DefaultValueFactory = _ => "0dB" };
+        var raiseBy = new Option<string>("--raise-by") { Description = "How much more attenuation the second sweep has.", HelpName = "DB", DefaultValueFactory = _ => "10dB" };
+        var threshold = new Option<string>("--threshold") { Description = "Judge lines above this level; keep it well above the raised noise floor.", HelpName = "DBM", DefaultValueFactory = _ => "-90dBm" };
+        var tolerance = new Option<string>("--tolerance") { Description = "How far a real line may move, ± dB; below half of --raise-by.", HelpName = "DB", DefaultValueFactory = _ => "1dB" };
         var carriers = new Option<string[]>("--carrier") { Description = "A carrier known to be present, for naming harmonics and two-tone products with dBc; repeat for several. Default: the test tone.", HelpName = "FREQ", AllowMultipleArgumentsPerToken = false };
         var lines = new Option<string[]>("--line") { Description = "A line you rely on; the verdict fails only when one of these is analyser-made. Repeat for several. Default: every line.", HelpName = "FREQ" };
         var tone = new Option<string?>("--tone") { Description = "Set the bench's signal generator to this frequency and switch it on for the check (off afterwards).", HelpName = "FREQ" };
         var toneLevel = new Option<string?>("--tone-level") { Description = "The test tone's level (checked against the bench's safety limits).", HelpName = "DBM" };
         var generator = new Option<string?>("--generator") { Description = "The generator's role for --tone; needed only when the bench has several.", HelpName = "ROLE" };
-        var db = new Option<string>("--db") { Description = $"The result database (created if missing). Default {ResultsCommand.DefaultDatabase}.", HelpName = "FILE", DefaultValueFactory = _ => ResultsCommand.DefaultDatabase };
+        var db = new Option<string>("--db") { Description = "The result database (created if missing).", HelpName = "FILE", DefaultValueFactory = _ => ResultsCommand.DefaultDatabase };
         var json = CommonOptions.Json();
         var command = new Command("overload", "Tell real spectral lines from those the spectrum analyser makes itself: sweep, sweep again with more input attenuation, and label each line. Exit 0 no relied-on line analyser-made, 1 one is, 2 bad input, 3 instrument failure, 130 stopped.")
         {
