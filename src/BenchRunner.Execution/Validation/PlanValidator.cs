@@ -67,6 +67,16 @@ public static class PlanValidator
             }
         }
 
+        foreach (var step in plan.AllSteps().OfType<SpectrumAnalyserSetup>())
+        {
+            if (bench.CompensationOf(step.Role) is { CablePoints.Count: > 0 } fixture
+                && (step.Start < fixture.CablePoints.Min(p => p.Frequency) || step.Stop > fixture.CablePoints.Max(p => p.Frequency)))
+            {
+                problems.Add(new(step.Location,
+                    $"the span {step.Start} to {step.Stop} of {step.Role} reaches outside the cable table of its compensation ({fixture.CablePoints.Min(p => p.Frequency)} to {fixture.CablePoints.Max(p => p.Frequency)}, {fixture.Location}); a loss is never extrapolated: extend the table or narrow the span"));
+            }
+        }
+
         return problems;
     }
 

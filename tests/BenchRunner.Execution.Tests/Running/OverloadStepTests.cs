@@ -26,12 +26,15 @@ public sealed class OverloadStepTests
     /// from memory). So with 10 dB more attenuation the 2nd harmonic stays put and the 3rd falls by
     /// 20 dB, the 3 dB/dB rule.
     /// </summary>
-    private static (PlanRunner Runner, VirtualBench Bench) Create(ResultStore? store, string benchFile = "bench-virtual.yaml")
+    private static (PlanRunner Runner, VirtualBench Bench) Create(ResultStore? store, string benchFile = "bench-virtual.yaml") =>
+        Create(store, BenchFile.Load(RepositoryFiles.Example(benchFile)));
+
+    private static (PlanRunner Runner, VirtualBench Bench) Create(ResultStore? store, BenchDefinition definition)
     {
         var harmonics = new[] { GeneratorHarmonic.Of(2, Ratio.FromDecibels(-20)), GeneratorHarmonic.Of(3, Ratio.FromDecibels(-80)) };
         var bench = new VirtualBench(5, path: FixedPath.Loss(Ratio.FromDecibels(1)), generatorOptions: new SignalGeneratorOptions { Harmonics = harmonics });
         var transports = SimulatorConnections.Register(new TransportFactory(), new VirtualBenchServers(bench));
-        return (new PlanRunner(BenchFile.Load(RepositoryFiles.Example(benchFile)), transports, store), bench);
+        return (new PlanRunner(definition, transports, store), bench);
     }
 
     private static TestPlan Plan(string lines, string level = "-6 dBm") => PlanFile.Parse($$"""
@@ -173,5 +176,45 @@ public sealed class OverloadStepTests
         Assert.StartsWith("compensated: probe 4.7 kOhm into 50 Ohm (39.554 dB) + DC block 0.3 dB + cable table", sweep.Record.Compensation);
         var sa = Assert.Single(store.GetInstruments(outcome.RunId.Value), i => i.Role == "sa");
         Assert.Contains("\"series_ohms\":4700", sa.CompensationJson);
+    }
+
+    [Fact]
+    public async Task Sweep_OutsideTheCableTable_IsStoredAsReadAndFlaggedUncalibrated()
+    {
+        using var dir = new TempDirectory();
+        using var store = ResultStore.Open(dir.PathOf("runs.db"));
+        var definition = BenchFile.Parse("""
+            bench: b
+            instruments:
+              sa: { kind: spectrum-analyser, adapter: scpi, profile: profiles/bench-sa-scpi.yaml, connection: "sim:sa?dialect=scpi" }
+            compensation:
+              sa:
+                attenuators: [20 dB]
+                cable: { 137 MHz: 0.3 dB, 138 MHz: 0.3 dB }
+            """, "bench.yaml", RepositoryFiles.Example(""));
+        var (runner, _) = Create(store, definition);
+        var plan = PlanFile.Parse("""
+            plan: wide
+            roles: { sa: spectrum-analyser }
+            steps:
+              - set-spectrum-analyser: { role: sa, centre: 137.5 MHz, span: 4 MHz }
+              - sweep: { role: sa, traces: { power: wide } }
+            """, "wide.yaml", dir.Path);
+        var observer = new Collector();
+
+        var outcome = await runner.RunAsync(plan, Context(), observer, CancellationToken.None).WaitAsync(Limit);
+
+        Assert.True(outcome.Status == RunStatus.Passed, outcome.Error);
+        var sweep = Assert.Single(store.GetSweeps(outcome.RunId!.Value));
+        Assert.Equal(SweepFlags.Uncalibrated, sweep.Record.Flags);
+        Assert.StartsWith("not compensated: 135.5 MHz is outside the cable loss table", sweep.Record.Compensation);
+        Assert.Contains(observer.Events.OfType<OperatorMessage>(), m => m.Text.Contains("NOT compensated", StringComparison.Ordinal));
+    }
+
+    private sealed class Collector : IRunObserver
+    {
+        public List<RunEvent> Events { get; } = [];
+
+        public void OnEvent(RunEvent runEvent) => Events.Add(runEvent);
     }
 }

@@ -72,4 +72,15 @@ public sealed class CompensationSafetyTests
         Assert.Empty(ProbingCautions.For(Plan("-10 dBm"), Parse(Bench)));
         Assert.Empty(ProbingCautions.For(Plan("-10 dBm"), Parse(Bench + "\ncompensation:\n  sa:\n    attenuators: [10 dB]\n")));
     }
+
+    [Fact]
+    public void CheckAgainstBench_SpanBeyondTheCableTable_IsAProblemAtTheSetup()
+    {
+        var bench = Parse(Bench + "\ncompensation:\n  sa:\n    cable: { 137 MHz: 0.3 dB, 138 MHz: 0.3 dB }\n");
+
+        var problem = Assert.Single(PlanValidator.CheckAgainstBench(Plan("-10 dBm"), bench));
+
+        Assert.Equal(5, problem.Location.Line);
+        Assert.StartsWith("the span 136.5 MHz to 138.5 MHz of sa reaches outside the cable table of its compensation (137 MHz to 138 MHz", problem.Detail);
+    }
 }
