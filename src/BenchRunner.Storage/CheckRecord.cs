@@ -4,7 +4,7 @@ namespace BenchRunner.Storage;
 
 /// <summary>The outcome of one check; given to <see cref="ResultStore.AddCheck"/>. Numbers must be finite.</summary>
 /// <param name="Name">The check's name in the plan.</param>
-/// <param name="Kind">Mask or figure limit.</param>
+/// <param name="Kind">Mask, figure limit or overload check.</param>
 /// <param name="Passed">Whether it passed.</param>
 public sealed record CheckRecord(string Name, CheckKind Kind, bool Passed)
 {
@@ -31,4 +31,10 @@ public sealed record CheckRecord(string Name, CheckKind Kind, bool Passed)
 
     /// <summary>A one-line account for people.</summary>
     public string? Message { get; init; }
+
+    /// <summary>Conditions noted with the check, e.g. that the trace it judged was measured while overloaded.</summary>
+    public CheckFlags Flags { get; init; }
+
+    /// <summary>What the check judged, line by line, as a JSON document (an overload check's lines); null when there is nothing more.</summary>
+    public string? DetailJson { get; init; }
 }

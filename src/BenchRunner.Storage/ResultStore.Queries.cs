@@ -111,6 +111,8 @@ public sealed partial class ResultStore
                 MarginUnit = row.TextOrNull("margin_unit"),
                 WorstFrequency = row.RealOrNull("worst_hz") is { } hz ? Frequency.FromHertz(hz) : null,
                 Message = row.TextOrNull("message"),
+                Flags = (CheckFlags)row.Integer("flags"),
+                DetailJson = row.TextOrNull("detail_json"),
             }));
 
     /// <summary>
@@ -159,6 +161,7 @@ public sealed partial class ResultStore
             InstrumentRole = row.TextOrNull("instrument_role"),
             TraceName = row.TextOrNull("trace_name"),
             SettingsJson = row.TextOrNull("settings_json"),
+            Compensation = row.TextOrNull("compensation"),
             Flags = (SweepFlags)row.Integer("flags"),
             AcquiredUtc = row.Utc("acquired_utc"),
         };

@@ -101,6 +101,7 @@ public sealed partial class ResultStore
         Validate.OptionalText(sweep.InstrumentRole, nameof(sweep.InstrumentRole));
         Validate.OptionalText(sweep.TraceName, nameof(sweep.TraceName));
         Validate.Json(sweep.SettingsJson, nameof(sweep.SettingsJson));
+        Validate.OptionalText(sweep.Compensation, nameof(sweep.Compensation));
         ValidateFigures(sweep);
         if ((sweep.Flags & ~(SweepFlags.Overloaded | SweepFlags.Uncalibrated | SweepFlags.Unlevelled)) != 0)
         {
@@ -116,10 +117,11 @@ public sealed partial class ResultStore
             RequireRunning(transaction, runId);
             using var command = Command(transaction, """
                 INSERT INTO sweeps (run_id, seq, step_name, instrument_role, trace_name, quantity, unit, point_count,
-                                    axis_kind, start_hz, stop_hz, axis_hz, samples, settings_json, acquired_utc, flags)
+                                    axis_kind, start_hz, stop_hz, axis_hz, samples, settings_json, acquired_utc, flags,
+                                    compensation)
                 VALUES ($run, (SELECT coalesce(max(seq), 0) + 1 FROM sweeps WHERE run_id = $run), $step, $role, $trace,
                         $quantity, $unit, $points, $axis_kind, $start_hz, $stop_hz, $axis_hz, $samples, $settings,
-                        $acquired_utc, $flags)
+                        $acquired_utc, $flags, $compensation)
                 RETURNING id
                 """);
             command.With("$run", runId).With("$step", sweep.StepName).With("$role", sweep.InstrumentRole)
@@ -128,7 +130,7 @@ public sealed partial class ResultStore
                 .With("$start_hz", axis.StartHz).With("$stop_hz", axis.StopHz).With("$axis_hz", axis.PointsBlob)
                 .With("$samples", samples).With("$settings", sweep.SettingsJson)
                 .With("$acquired_utc", UtcText.From(sweep.AcquiredUtc ?? _time.GetUtcNow()))
-                .With("$flags", (int)sweep.Flags);
+                .With("$flags", (int)sweep.Flags).With("$compensation", sweep.Compensation);
             var sweepId = (long)command.ExecuteScalar()!;
             InsertFigures(transaction, runId, sweepId, sweep);
             return sweepId;
@@ -137,7 +139,7 @@ public sealed partial class ResultStore
 
     /// <summary>Records the outcome of a check of a running run.</summary>
     /// <returns>The check's id.</returns>
-    /// <exception cref="ArgumentException">No such run, an empty name, a number that is not finite, or a sweep that is not part of the run.</exception>
+    /// <exception cref="ArgumentException">No such run, an empty name, a number that is not finite, undefined flags, detail that is not valid JSON, or a sweep that is not part of the run.</exception>
     /// <exception cref="InvalidOperationException">The run has finished.</exception>
     /// <exception cref="ResultStoreException">The file refused the write (busy beyond <see cref="BusyTimeout"/>, full, damaged).</exception>
     public long AddCheck(long runId, CheckRecord check)
@@ -146,6 +148,12 @@ public sealed partial class ResultStore
         Validate.Required(check.Name, nameof(check.Name));
         Validate.Finite(check.Measured, nameof(check.Measured));
         Validate.Finite(check.Margin, nameof(check.Margin));
+        Validate.Json(check.DetailJson, nameof(check.DetailJson));
+        if ((check.Flags & ~CheckFlags.TraceOverloaded) != 0)
+        {
+            throw new ArgumentException($"Undefined check flags: {(int)check.Flags}.", nameof(check));
+        }
+
         var kind = ColumnText.From(check.Kind);
 
         return Write(transaction =>
@@ -162,16 +170,17 @@ public sealed partial class ResultStore
 
             using var command = Command(transaction, """
                 INSERT INTO checks (run_id, sweep_id, name, kind, passed, measured, measured_unit, limit_text, margin,
-                                    margin_unit, worst_hz, message)
+                                    margin_unit, worst_hz, message, flags, detail_json)
                 VALUES ($run, $sweep, $name, $kind, $passed, $measured, $measured_unit, $limit_text, $margin,
-                        $margin_unit, $worst_hz, $message)
+                        $margin_unit, $worst_hz, $message, $flags, $detail_json)
                 RETURNING id
                 """);
             command.With("$run", runId).With("$sweep", check.SweepId).With("$name", check.Name).With("$kind", kind)
                 .With("$passed", check.Passed ? 1 : 0).With("$measured", check.Measured)
                 .With("$measured_unit", check.MeasuredUnit).With("$limit_text", check.LimitText)
                 .With("$margin", check.Margin).With("$margin_unit", check.MarginUnit)
-                .With("$worst_hz", check.WorstFrequency?.Hertz).With("$message", check.Message);
+                .With("$worst_hz", check.WorstFrequency?.Hertz).With("$message", check.Message)
+                .With("$flags", (int)check.Flags).With("$detail_json", check.DetailJson);
             return (long)command.ExecuteScalar()!;
         });
     }

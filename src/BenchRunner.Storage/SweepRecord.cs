@@ -20,6 +20,12 @@ public sealed record SweepRecord(string StepName, Trace Trace)
     /// <summary>Figures computed from the trace; keys must be unique within a sweep. Empty by default.</summary>
     public IReadOnlyList<NamedFigure> Figures { get; init; } = [];
 
+    /// <summary>
+    /// What path compensation the levels carry, in one line (e.g. <c>compensated: probe 4.7 kOhm into 50 Ohm (39.554 dB)</c>);
+    /// null when the caller says nothing about it.
+    /// </summary>
+    public string? Compensation { get; init; }
+
     /// <summary>Conditions noted during the sweep.</summary>
     public SweepFlags Flags { get; init; }
 

@@ -52,6 +52,11 @@ public static class RunCommand
                 Operator = parsed.GetValue(op),
             };
             console.Error.WriteLine($"Running {validated.Plan.Name} on {validated.Bench!.Name}{(context.DutSerial is null ? "" : $" for {context.DutSerial}")}");
+            foreach (var caution in ProbingCautions.For(validated.Plan, validated.Bench))
+            {
+                console.Error.WriteLine(caution);
+            }
+
             var outcome = await runner.RunAsync(validated.Plan, context, new RunProgressView(console.Error, console.UseColour), cancellationToken).ConfigureAwait(false);
             if (parsed.GetValue(json))
             {
@@ -91,6 +96,18 @@ public static class RunCommand
             writer.WriteLine($"  failed: {check.Name}: {check.Detail}");
         }
 
+        foreach (var check in outcome.Checks.Where(c => c.Lines.Count > 0))
+        {
+            writer.WriteLine($"  {check.Name}:");
+            OverloadLinesView.Write(check.Lines, writer, "    ", colour);
+        }
+
+        var flagged = outcome.Checks.Count(c => c.TraceOverloaded);
+        if (flagged > 0)
+        {
+            writer.WriteLine(Display.Colour($"  {flagged} check(s) judged a trace measured while the analyser was overloaded; do not trust their verdicts until it is measured again with more attenuation.", ConsoleColour.Yellow, colour));
+        }
+
         writer.WriteLine($"{outcome.Checks.Count(c => c.Passed)} of {outcome.Checks.Count} checks passed; run {outcome.RunId} stored in {db} (benchrunner results --db {db} --run {outcome.RunId}).");
     }
 
@@ -106,7 +123,8 @@ public static class RunCommand
             ["checks"] = new JsonArray(outcome.Checks.Select(c => (JsonNode?)new JsonObject
             {
                 ["step"] = c.Step, ["name"] = c.Name, ["passed"] = c.Passed, ["detail"] = c.Detail,
-                ["margin"] = c.Margin, ["margin_unit"] = c.MarginUnit,
+                ["margin"] = c.Margin, ["margin_unit"] = c.MarginUnit, ["trace_overloaded"] = c.TraceOverloaded,
+                ["lines"] = c.Lines.Count == 0 ? null : OverloadLinesView.Json(c.Lines),
             }).ToArray()),
         };
         writer.WriteLine(document.ToJsonString(new JsonSerializerOptions { WriteIndented = true }));

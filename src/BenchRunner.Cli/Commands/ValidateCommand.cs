@@ -69,7 +69,8 @@ public static class ValidateCommand
     {
         var p = validated.Plan;
         var steps = p.AllSteps().ToList();
-        int checks = steps.Count(s => s is MaskCheck) + steps.OfType<FigureCheck>().Sum(f => f.Limits.Count);
+        int overload = steps.Count(s => s is OverloadCheckStep);
+        int checks = steps.Count(s => s is MaskCheck) + steps.OfType<FigureCheck>().Sum(f => f.Limits.Count) + overload;
         var roles = string.Join(", ", p.Roles.Select(r => $"{r.Role} ({Execution.InstrumentKindWords.Of(r.Kind)})"));
         if (asJson)
         {
@@ -90,6 +91,6 @@ public static class ValidateCommand
         console.Out.WriteLine($"Plan \"{p.Name}\" is valid{(validated.Bench is { } b ? $" on bench \"{b.Name}\"" : "")}.");
         console.Out.WriteLine($"  roles   {roles}");
         console.Out.WriteLine($"  steps   {steps.Count}");
-        console.Out.WriteLine($"  checks  {checks} ({steps.Count(s => s is MaskCheck)} mask, {checks - steps.Count(s => s is MaskCheck)} figure limits)");
+        console.Out.WriteLine($"  checks  {checks} ({steps.Count(s => s is MaskCheck)} mask, {checks - overload - steps.Count(s => s is MaskCheck)} figure limits{(overload > 0 ? $", {overload} overload" : "")})");
     }
 }

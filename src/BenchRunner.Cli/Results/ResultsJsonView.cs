@@ -23,6 +23,7 @@ public static class ResultsJsonView
         {
             ["role"] = i.Role, ["kind"] = i.Kind, ["maker"] = i.Maker, ["model"] = i.Model,
             ["serial"] = i.Serial, ["firmware"] = i.Firmware, ["connection"] = i.Connection,
+            ["compensation"] = i.CompensationJson is null ? null : JsonNode.Parse(i.CompensationJson),
         }).ToArray());
         document["checks"] = new JsonArray(checks.Select(c => (JsonNode?)new JsonObject
         {
@@ -30,6 +31,8 @@ public static class ResultsJsonView
             ["measured"] = c.Record.Measured, ["measured_unit"] = c.Record.MeasuredUnit, ["limit"] = c.Record.LimitText,
             ["margin"] = c.Record.Margin, ["margin_unit"] = c.Record.MarginUnit, ["worst_hz"] = c.Record.WorstFrequency?.Hertz,
             ["message"] = c.Record.Message,
+            ["trace_overloaded"] = c.Record.Flags.HasFlag(CheckFlags.TraceOverloaded),
+            ["detail"] = c.Record.DetailJson is null ? null : JsonNode.Parse(c.Record.DetailJson),
         }).ToArray());
         var bySweep = figures.ToLookup(f => f.SweepId);
         document["sweeps"] = new JsonArray(sweeps.Select(s =>
@@ -45,6 +48,9 @@ public static class ResultsJsonView
                 ["sequence"] = s.Sequence, ["step"] = s.Record.StepName, ["trace"] = s.Record.TraceName,
                 ["quantity"] = s.Record.Trace.Quantity.ToString(), ["points"] = s.Record.Trace.Count,
                 ["acquired_utc"] = s.Record.AcquiredUtc is { } t ? Utc(t) : null, ["figures"] = values,
+                ["overloaded"] = s.Record.Flags.HasFlag(SweepFlags.Overloaded),
+                ["uncalibrated"] = s.Record.Flags.HasFlag(SweepFlags.Uncalibrated),
+                ["compensation"] = s.Record.Compensation,
             };
         }).ToArray());
         writer.WriteLine(document.ToJsonString(Indented));

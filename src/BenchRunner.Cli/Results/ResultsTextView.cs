@@ -55,11 +55,14 @@ public static class ResultsTextView
             foreach (var c in checks)
             {
                 var margin = c.Record.Margin is { } m ? $", margin {Display.Value(m, c.Record.MarginUnit ?? "")}" : "";
-                writer.WriteLine($"    {(c.Record.Passed ? "pass" : "FAIL")}  {c.Record.Name}{(c.Record.LimitText is null ? "" : $" ({c.Record.LimitText})")}{margin}");
+                var flagged = c.Record.Flags.HasFlag(CheckFlags.TraceOverloaded) ? "  [FLAGGED: trace measured while overloaded]" : "";
+                writer.WriteLine($"    {(c.Record.Passed ? "pass" : "FAIL")}  {c.Record.Name}{(c.Record.LimitText is null ? "" : $" ({c.Record.LimitText})")}{margin}{flagged}");
                 if (c.Record.Message is not null)
                 {
                     writer.WriteLine($"          {c.Record.Message}");
                 }
+
+                OverloadLinesView.WriteStored(c.Record.DetailJson, writer, "          ", colour: false);
             }
         }
 
@@ -76,6 +79,22 @@ public static class ResultsTextView
                 var cells = shown.Select(key => values.TryGetValue(key, out var f) && f.Value is { } v ? Display.Value(v, f.Unit) : "-");
                 var acquired = s.Record.AcquiredUtc is { } t ? t.UtcDateTime.ToString("HH:mm:ss.fff", CultureInfo.InvariantCulture) : "-";
                 writer.WriteLine("    " + string.Join("  ", new[] { $"{s.Sequence,4}", $"{acquired,-12}", $"{s.Record.TraceName ?? s.Record.Trace.Quantity.ToString(),-10}" }.Concat(cells.Select(c => $"{c,16}"))));
+            }
+
+            foreach (var s in sweeps.Where(s => s.Record.Flags != SweepFlags.None || s.Record.Compensation is not (null or "no path compensation")))
+            {
+                var notes = new List<string>();
+                if (s.Record.Flags != SweepFlags.None)
+                {
+                    notes.Add(s.Record.Flags.ToString().ToLowerInvariant());
+                }
+
+                if (s.Record.Compensation is { } compensation)
+                {
+                    notes.Add(compensation);
+                }
+
+                writer.WriteLine($"    #{s.Sequence} {s.Record.TraceName}: {string.Join("; ", notes)}");
             }
         }
     }

@@ -19,7 +19,10 @@ public static class OverloadCheck
     /// <paramref name="higher"/> (at <paramref name="higherAttenuation"/>), both corrected for the
     /// attenuation as analysers display them. Every line of the lower sweep above the threshold is
     /// matched to the nearest line of the higher sweep within the frequency tolerance (found at any
-    /// level, with the same least prominence) and classified by its change.
+    /// level, with the same least prominence) and classified by its change. A line that does not stand
+    /// its least prominence plus the tolerance above the higher sweep's noise floor is
+    /// <see cref="OverloadClass.HiddenByNoise"/> whether matched or not: the raised floor would hide
+    /// it even if it were real, and its match may be noise.
     /// </summary>
     /// <returns>
     /// Unavailable when the step is not positive, the step is not more than twice the level
@@ -68,15 +71,17 @@ public static class OverloadCheck
                 }
             }
 
+            // A real line keeps its level, so it would still stand its least prominence above the raised floor.
+            bool wouldShow = line.LevelDb >= floor.Dbm + options.MinExcursionDb + tolerance;
             if (match is { } m)
             {
+                // Below that, the match may be a ripple of the raised floor itself: a real line and noise cannot be told apart.
                 double change = m.LevelDb - line.LevelDb;
-                judged.Add(new OverloadPeak(line.Frequency, line.LevelDb, m.LevelDb, change, Classify(change, step, tolerance)));
+                judged.Add(new OverloadPeak(line.Frequency, line.LevelDb, m.LevelDb, change,
+                    wouldShow ? Classify(change, step, tolerance) : OverloadClass.HiddenByNoise));
             }
             else
             {
-                // A real line keeps its level, so it would still stand its least prominence above the raised floor.
-                bool wouldShow = line.LevelDb >= floor.Dbm + options.MinExcursionDb + tolerance;
                 judged.Add(new OverloadPeak(line.Frequency, line.LevelDb, null, null,
                     wouldShow ? OverloadClass.VanishedAnalyserMade : OverloadClass.HiddenByNoise));
             }

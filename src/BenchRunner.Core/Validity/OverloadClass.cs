@@ -22,8 +22,9 @@ public enum OverloadClass
     VanishedAnalyserMade,
 
     /// <summary>
-    /// It was found at the lower attenuation only, but the higher sweep's noise floor (raised by the
-    /// step) would have hidden it even if it were real: undecided.
+    /// It stood less than its least prominence plus the tolerance above the higher sweep's noise floor
+    /// (raised by the step), which would have hidden it even if it were real; whatever was found near it
+    /// in the higher sweep may be noise: undecided.
     /// </summary>
     HiddenByNoise,
 }

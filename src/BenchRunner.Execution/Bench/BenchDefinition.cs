@@ -13,6 +13,12 @@ public sealed record BenchDefinition(
     IReadOnlyList<SignalPath> Paths,
     string Source)
 {
+    /// <summary>The path compensation of each spectrum analyser input that has one, by the analyser's role (the bench file's <c>compensation</c> section).</summary>
+    public IReadOnlyDictionary<string, InputCompensation> Compensations { get; init; } = new Dictionary<string, InputCompensation>();
+
+    /// <summary>The compensation declared for <paramref name="role"/>'s input, or null.</summary>
+    public InputCompensation? CompensationOf(string role) => Compensations.TryGetValue(role, out var c) ? c : null;
+
     /// <summary>The paths that leave <paramref name="role"/>'s output.</summary>
     public IEnumerable<SignalPath> PathsFrom(string role) => Paths.Where(p => p.From == role);
 }

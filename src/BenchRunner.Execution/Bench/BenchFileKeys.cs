@@ -7,6 +7,7 @@ internal static class BenchFileKeys
     public const string Description = "description";
     public const string InstrumentMap = "instruments";
     public const string Paths = "paths";
+    public const string Compensation = "compensation";
 
     public const string Kind = "kind";
     public const string Adapter = "adapter";
@@ -19,7 +20,14 @@ internal static class BenchFileKeys
 
     public const string Arrow = "->";
 
-    public static readonly IReadOnlyList<string> Top = [BenchName, Description, InstrumentMap, Paths];
+    public const string Probe = "probe";
+    public const string Impedance = "impedance";
+    public const string Attenuators = "attenuators";
+    public const string DcBlock = "dc-block";
+    public const string Cable = "cable";
+
+    public static readonly IReadOnlyList<string> Top = [BenchName, Description, InstrumentMap, Paths, Compensation];
+    public static readonly IReadOnlyList<string> CompensationKeys = [Probe, Impedance, Attenuators, DcBlock, Cable];
     public static readonly IReadOnlyList<string> InstrumentKeys = [Kind, Adapter, Profile, Connection, Limits, Description];
     public static readonly IReadOnlyList<string> LimitKeys = [MaxInputLevel, MaxOutputLevel];
 

@@ -11,7 +11,7 @@ namespace BenchRunner.Execution.Bench;
 /// Turns the YAML tree of a bench file into a <see cref="BenchDefinition"/>, collecting every
 /// problem (its own and those of the profiles it names) and throwing them together at the end.
 /// </summary>
-internal sealed class BenchFileReader
+internal sealed partial class BenchFileReader
 {
     private readonly YamlProblems _problems;
     private readonly string _folder;
@@ -50,7 +50,8 @@ internal sealed class BenchFileReader
         }
 
         var paths = map.Get(Paths) is { } p ? ReadPaths(p, map, instruments) : [];
-        return _problems.Any ? null : new BenchDefinition(name!, description, instruments, paths, source);
+        var compensations = map.Get(Compensation) is { } c ? ReadCompensations(c, map, instruments) : [];
+        return _problems.Any ? null : new BenchDefinition(name!, description, instruments, paths, source) { Compensations = compensations };
     }
 
     private void ReadInstruments(YamlItem item, StrictMap top, Dictionary<string, BenchInstrument> into)

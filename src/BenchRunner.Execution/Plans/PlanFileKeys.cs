@@ -20,6 +20,7 @@ internal static class PlanFileKeys
     public const string Wait = "wait";
     public const string Message = "message";
     public const string Repeat = "repeat";
+    public const string CheckOverload = "check-overload";
 
     public const string Role = "role";
     public const string Start = "start";
@@ -45,13 +46,17 @@ internal static class PlanFileKeys
     public const string Times = "times";
     public const string Until = "until";
     public const string AtMost = "at-most";
+    public const string RaiseBy = "raise-by";
+    public const string Threshold = "threshold";
+    public const string Carriers = "carriers";
+    public const string Lines = "lines";
 
     public const int MaxPoints = 100_001;
     public const int MaxPasses = 1_000_000;
 
     public static readonly IReadOnlyList<string> Top = [Plan, Description, Roles, Steps];
     public static readonly IReadOnlyList<string> StepWords =
-        [SetNetworkAnalyser, SetSpectrumAnalyser, SetGenerator, Sweep, CheckMask, CheckFigures, Wait, Message, Repeat];
+        [SetNetworkAnalyser, SetSpectrumAnalyser, SetGenerator, Sweep, CheckMask, CheckFigures, Wait, Message, Repeat, CheckOverload];
     public static readonly IReadOnlyList<string> StepKeys = [Name, .. StepWords];
     public static readonly IReadOnlyList<string> NetworkKeys = [Role, Start, Stop, Points, IfBandwidth];
     public static readonly IReadOnlyList<string> SpectrumKeys = [Role, Start, Stop, Centre, Span, Rbw, Attenuation, ReferenceLevel];
@@ -61,6 +66,7 @@ internal static class PlanFileKeys
     public static readonly IReadOnlyList<string> FigureKeys = [TraceKey, Figures];
     public static readonly IReadOnlyList<string> LimitKeys = [Min, Max, Target, Tolerance];
     public static readonly IReadOnlyList<string> RepeatKeys = [Times, Until, AtMost, Steps];
+    public static readonly IReadOnlyList<string> OverloadKeys = [Role, TraceKey, RaiseBy, Threshold, Tolerance, Carriers, Lines];
 
     public static readonly IReadOnlyList<(string Word, bool Value)> OnOff = [("on", true), ("off", false)];
 

@@ -58,6 +58,7 @@ internal sealed partial class PlanFileReader
             _problems.Add(empty, $"\"{Steps}\" is empty; a plan needs at least one step");
         }
 
+        CheckAnalyserSetBeforeOverloadCheck(steps);
         return _problems.Any ? null : new TestPlan(name!, description, [.. _roles.Values], steps, _source);
     }
 
@@ -143,6 +144,7 @@ internal sealed partial class PlanFileReader
             CheckFigures => ReadFigureCheck(map, name, at),
             Wait => map.Parsed(Wait, DurationText.Parse) is { } d ? new WaitStep(name, at, d) : null,
             Message => map.Text(Message) is { } m ? new MessageStep(name, at, m.Value.Trim()) : null,
+            CheckOverload => ReadOverloadCheck(map, name, at),
             _ => ReadRepeat(map, name, at),
         };
     }

@@ -7,4 +7,14 @@ namespace BenchRunner.Execution.Running;
 /// <param name="Detail">The measured value and the limit, in words.</param>
 /// <param name="Margin">How far inside (positive) or outside (negative) the limit, when known.</param>
 /// <param name="MarginUnit">The margin's unit (dB, Hz, ...).</param>
-public sealed record CheckResult(string Step, string Name, bool Passed, string Detail, double? Margin, string? MarginUnit);
+public sealed record CheckResult(string Step, string Name, bool Passed, string Detail, double? Margin, string? MarginUnit)
+{
+    /// <summary>What is added to the detail of a check made on a trace measured while the analyser was overloaded.</summary>
+    public const string OverloadedNote = "FLAGGED: the trace was measured while the analyser made lines of its own (see the overload check)";
+
+    /// <summary>True when the trace it judged was measured while the analyser made lines of its own; the verdict is then not to be trusted.</summary>
+    public bool TraceOverloaded { get; init; }
+
+    /// <summary>For an overload check, every line it judged; empty for other checks.</summary>
+    public IReadOnlyList<JudgedLine> Lines { get; init; } = [];
+}

@@ -21,7 +21,7 @@ namespace BenchRunner.Execution.Running;
 /// bench's declared safety limits. Cancellation stops cleanly: the run is marked stopped and
 /// everything acquired so far is kept.
 /// </summary>
-public sealed class PlanRunner
+public sealed partial class PlanRunner
 {
     /// <summary>The caution shown with every refused setting.</summary>
     public const string InputCaution =
@@ -117,6 +117,7 @@ public sealed class PlanRunner
             _store!.AddInstrument(runId, new InstrumentRecord(role, KindWord(declared.Kind), id.Maker, id.Model, id.Serial, id.Firmware)
             {
                 Connection = declared.Connection.ToString(),
+                CompensationJson = _bench.CompensationOf(role)?.ToJson(),
             });
         }
     }
@@ -135,7 +136,7 @@ public sealed class PlanRunner
                         new NetworkSweep(na.Start, na.Stop, na.Points, na.IfBandwidth), cancellationToken).ConfigureAwait(false);
                     break;
                 case SpectrumAnalyserSetup sa:
-                    await Capability<ISpectrumAnalyser>(state, sa.Role).ConfigureAsync(new SpectrumSettings(
+                    await Capability<ISpectrumAnalyser>(state, sa.Role).ConfigureAsync(state.SpectrumSettings[sa.Role] = new SpectrumSettings(
                         FrequencyRange.Between(sa.Start, sa.Stop),
                         sa.Rbw ?? Frequency.FromKilohertz(10),
                         sa.Attenuation ?? Ratio.FromDecibels(10),
@@ -153,7 +154,7 @@ public sealed class PlanRunner
                 case FigureCheck figures:
                     foreach (var limit in figures.Limits)
                     {
-                        state.Record(_store, CheckFigure(figures.Trace, limit, name, state), state.SweepIdOf(figures.Trace));
+                        state.Record(_store, CheckFigure(figures.Trace, limit, name, state), state.SweepIdOf(figures.Trace), trace: figures.Trace);
                     }
 
                     break;
@@ -162,6 +163,9 @@ public sealed class PlanRunner
                     break;
                 case MessageStep message:
                     state.Emit(now => new OperatorMessage(now, message.Text));
+                    break;
+                case OverloadCheckStep overload:
+                    await CheckOverloadAsync(overload, name, state, cancellationToken).ConfigureAwait(false);
                     break;
                 case RepeatStep repeat:
                     await RepeatAsync(repeat, name, state, cancellationToken).ConfigureAwait(false);
@@ -220,11 +224,11 @@ public sealed class PlanRunner
             }
 
             var maximum = receiver.MaxInputLevel ?? receiver.Profile?.Limits.MaxInputLevel;
-            var arriving = level.Plus(path.Gain);
+            var arriving = ArrivingLevel(level, path);
             if (maximum is { } max && arriving > max)
             {
                 throw new SafetyRefusedException(
-                    $"refused: {generatorRole} level {level} through {path.Label} ({path.Gain}) reaches {arriving} at {path.To}, above its declared maximum input of {max}. {InputCaution}");
+                    $"refused: {generatorRole} level {level} through {path.Label} ({path.Gain}){CompensationNote(path.To)} reaches {arriving} at {path.To}, above its declared maximum input of {max}. {InputCaution}");
             }
         }
     }
@@ -242,14 +246,17 @@ public sealed class PlanRunner
         }
         else
         {
-            var power = await Capability<ISpectrumAnalyser>(state, step.Role).AcquireAsync(cancellationToken).ConfigureAwait(false);
-            Keep(step.Role, step.Traces.Single().Name, power, FigureSummary.ForSpectrum(power), name, state);
+            var raw = await Capability<ISpectrumAnalyser>(state, step.Role).AcquireAsync(cancellationToken).ConfigureAwait(false);
+            var (power, compensation, flags) = Compensate(step.Role, raw, state);
+            Keep(step.Role, step.Traces.Single().Name, power, FigureSummary.ForSpectrum(power), name, state, flags, compensation);
         }
     }
 
-    private void Keep(string role, string traceName, Trace trace, IReadOnlyList<NamedFigure> figures, string step, RunState state)
+    private void Keep(string role, string traceName, Trace trace, IReadOnlyList<NamedFigure> figures, string step, RunState state,
+        SweepFlags flags = SweepFlags.None, string? compensation = null)
     {
         state.Traces[traceName] = (trace, figures);
+        state.OverloadedTraces.Remove(traceName);
         if (state.RunId is { } runId)
         {
             state.SweepIds[traceName] = _store!.AddSweep(runId, new SweepRecord(step, trace)
@@ -258,6 +265,8 @@ public sealed class PlanRunner
                 TraceName = traceName,
                 Figures = figures,
                 AcquiredUtc = _time.GetUtcNow(),
+                Flags = flags,
+                Compensation = compensation,
             });
         }
 
@@ -273,7 +282,7 @@ public sealed class PlanRunner
             : "no point under the mask";
         var spans = evaluation.FailingSpans.Count == 0 ? "" : $"; fails {string.Join(", ", evaluation.FailingSpans.Select(s => $"{s.Start} to {s.Stop}"))}";
         var result = new CheckResult(name, $"mask {step.Mask.Name} on {step.Trace}", evaluation.Passed, worst + spans, evaluation.WorstMarginDb, "dB");
-        state.Record(_store, result, state.SweepIdOf(step.Trace), evaluation.WorstMarginAt, CheckKind.Mask);
+        state.Record(_store, result, state.SweepIdOf(step.Trace), evaluation.WorstMarginAt, CheckKind.Mask, step.Trace);
     }
 
     private static CheckResult CheckFigure(string traceName, FigureLimit limit, string step, RunState state)

@@ -67,6 +67,16 @@ public static class PlanValidator
             }
         }
 
+        foreach (var step in plan.AllSteps().OfType<SpectrumAnalyserSetup>())
+        {
+            if (bench.CompensationOf(step.Role) is { CablePoints.Count: > 0 } fixture
+                && (step.Start < fixture.CablePoints.Min(p => p.Frequency) || step.Stop > fixture.CablePoints.Max(p => p.Frequency)))
+            {
+                problems.Add(new(step.Location,
+                    $"the span {step.Start} to {step.Stop} of {step.Role} reaches outside the cable table of its compensation ({fixture.CablePoints.Min(p => p.Frequency)} to {fixture.CablePoints.Max(p => p.Frequency)}, {fixture.Location}); a loss is never extrapolated: extend the table or narrow the span"));
+            }
+        }
+
         return problems;
     }
 
@@ -84,11 +94,14 @@ public static class PlanValidator
                 continue;
             }
 
-            var reached = level.Plus(path.Gain);
+            // With a compensation the path ends at the probed point; the fixture's least loss lies between it and the input.
+            var fixture = bench.CompensationOf(path.To);
+            var reached = level.Plus(path.Gain - (fixture?.LeastLoss ?? Ratio.Unity));
             if (reached > maxIn)
             {
+                var through = fixture is null ? "" : $" and {receiver.Role}'s compensated input path (at least {Signed(fixture.LeastLoss.Decibels, "dB")} of loss)";
                 problems.Add(new(step.LevelLocation,
-                    $"{gen.Role} level {Signed(level)} through {path.Label} ({Signed(path.Gain)}) reaches {Signed(reached)} at {receiver.Role}, above its declared maximum input of {Signed(maxIn)}; {Caution}"));
+                    $"{gen.Role} level {Signed(level)} through {path.Label} ({Signed(path.Gain)}){through} reaches {Signed(reached)} at {receiver.Role}, above its declared maximum input of {Signed(maxIn)}; {Caution}"));
             }
         }
     }

@@ -50,6 +50,7 @@ internal static class ColumnText
     {
         CheckKind.Mask => "mask",
         CheckKind.FigureLimit => "figure_limit",
+        CheckKind.Overload => "overload",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "Not a check kind."),
     };
 
@@ -57,6 +58,7 @@ internal static class ColumnText
     {
         "mask" => CheckKind.Mask,
         "figure_limit" => CheckKind.FigureLimit,
+        "overload" => CheckKind.Overload,
         _ => throw new FormatException($"unknown check kind \"{text}\""),
     };
 

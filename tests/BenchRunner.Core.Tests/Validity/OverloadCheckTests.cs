@@ -37,6 +37,21 @@ public class OverloadCheckTests
     }
 
     [Fact]
+    public void Compare_LineNearTheRaisedFloorWithANoiseMatch_IsHiddenByNoiseNotChanged()
+    {
+        // The raised floor is −90 dBm; a line at −85 dBm stands less than 6 dB (least prominence) + 1 dB
+        // above it, so the −80 dBm ripple found there in the higher sweep proves nothing either way.
+        var lower = Trace(-100, (137, -20), (250, -85));
+        var higher = Trace(-90, (137, -20), (250, -80));
+
+        var verdict = OverloadCheck.Compare(lower, Zero, higher, Ten, Options).Value;
+
+        Assert.Equal([OverloadClass.Real, OverloadClass.HiddenByNoise], verdict.Peaks.Select(p => p.Class));
+        Assert.Equal(5, verdict.Peaks[1].ChangeDb!.Value, 1e-9);
+        Assert.False(verdict.AnyAnalyserMade);
+    }
+
+    [Fact]
     public void Compare_OnlyRealLines_GivesNoAdvice()
     {
         // A line within ±1 dB (the default tolerance) counts as real: 0.8 dB of change is real.

@@ -1,0 +1,142 @@
+using System.Globalization;
+using System.Text;
+using BenchRunner.Core.Quantities;
+using BenchRunner.Execution.Bench;
+using BenchRunner.Instruments.Profiles;
+
+namespace BenchRunner.Cli.Overload;
+
+/// <summary>
+/// What <c>benchrunner overload</c> was asked to do, checked and turned into plan text, so that the
+/// check runs through the same reader, pre-check, interlock and result file as any plan.
+/// </summary>
+public sealed class OverloadRequest
+{
+    /// <summary>The name the generated plan carries in the result file.</summary>
+    public const string PlanName = "overload-check";
+
+    /// <summary>The spectrum analyser's role.</summary>
+    public required string Analyser { get; init; }
+
+    /// <summary>The lower edge of the span.</summary>
+    public required Frequency Start { get; init; }
+
+    /// <summary>The upper edge of the span.</summary>
+    public required Frequency Stop { get; init; }
+
+    /// <summary>The resolution bandwidth.</summary>
+    public required Frequency Rbw { get; init; }
+
+    /// <summary>The input attenuation of the first sweep.</summary>
+    public required Ratio Attenuation { get; init; }
+
+    /// <summary>How much the second sweep raises it.</summary>
+    public required Ratio RaiseBy { get; init; }
+
+    /// <summary>Lines strictly above this level are judged.</summary>
+    public required Level Threshold { get; init; }
+
+    /// <summary>The level tolerance.</summary>
+    public required Ratio Tolerance { get; init; }
+
+    /// <summary>The carriers, for names and dBc.</summary>
+    public IReadOnlyList<Frequency> Carriers { get; init; } = [];
+
+    /// <summary>The lines relied on; empty means every line.</summary>
+    public IReadOnlyList<Frequency> Lines { get; init; } = [];
+
+    /// <summary>The generator's role when a test tone is to be set, else null.</summary>
+    public string? Generator { get; init; }
+
+    /// <summary>The test tone's frequency.</summary>
+    public Frequency? ToneFrequency { get; init; }
+
+    /// <summary>The test tone's level.</summary>
+    public Level? ToneLevel { get; init; }
+
+    /// <summary>The only instrument of <paramref name="kind"/> on the bench, or the one named; a usage error otherwise.</summary>
+    /// <exception cref="UsageException">No such instrument, or several and none named.</exception>
+    public static string PickRole(BenchDefinition bench, InstrumentKind kind, string? named, string option)
+    {
+        ArgumentNullException.ThrowIfNull(bench);
+        var word = Execution.InstrumentKindWords.Of(kind);
+        var candidates = bench.Instruments.Values.Where(i => i.Kind == kind).Select(i => i.Role).ToList();
+        if (named is not null)
+        {
+            return candidates.Contains(named)
+                ? named
+                : throw new UsageException($"{option} {named}: the bench \"{bench.Name}\" has no {word} of that name; it has {(candidates.Count == 0 ? "none" : string.Join(", ", candidates))}.");
+        }
+
+        return candidates.Count switch
+        {
+            1 => candidates[0],
+            0 => throw new UsageException($"the bench \"{bench.Name}\" has no {word}."),
+            _ => throw new UsageException($"the bench \"{bench.Name}\" has several of kind {word} ({string.Join(", ", candidates)}); name one with {option}."),
+        };
+    }
+
+    /// <summary>The request as a plan file's text (docs/plan-format.md); stored with the run as its plan.</summary>
+    public string ToPlanText()
+    {
+        var text = new StringBuilder();
+        Line(text, "# Written by benchrunner overload.");
+        Line(text, $"plan: {PlanName}");
+        Line(text, "roles:");
+        Line(text, $"  {Analyser}: spectrum-analyser");
+        if (Generator is not null)
+        {
+            Line(text, $"  {Generator}: signal-generator");
+        }
+
+        Line(text, "steps:");
+        if (Generator is not null)
+        {
+            var settings = new List<string> { $"role: {Generator}" };
+            if (ToneFrequency is { } f) settings.Add($"frequency: {f}");
+            if (ToneLevel is { } l) settings.Add($"level: {l}");
+            settings.Add("output: on");
+            Line(text, $"  - name: test tone");
+            Line(text, $"    set-generator: {{ {string.Join(", ", settings)} }}");
+        }
+
+        Line(text, "  - name: analyser setup");
+        Line(text, $"    set-spectrum-analyser: {{ role: {Analyser}, start: {Start}, stop: {Stop}, rbw: {Rbw}, attenuation: {Attenuation} }}");
+        Line(text, "  - name: overload check");
+        Line(text, "    check-overload:");
+        Line(text, $"      role: {Analyser}");
+        Line(text, "      trace: spectrum");
+        Line(text, $"      raise-by: {RaiseBy}");
+        Line(text, $"      threshold: {Threshold}");
+        Line(text, $"      tolerance: {Tolerance}");
+        if (Carriers.Count > 0) Line(text, $"      carriers: [{string.Join(", ", Carriers)}]");
+        if (Lines.Count > 0) Line(text, $"      lines: [{string.Join(", ", Lines)}]");
+        if (Generator is not null)
+        {
+            Line(text, "  - name: test tone off");
+            Line(text, $"    set-generator: {{ role: {Generator}, output: off }}");
+        }
+
+        return text.ToString();
+    }
+
+    private static void Line(StringBuilder text, string line) => text.Append(line).Append('\n');
+
+    /// <summary>Parses a command-line value with its unit.</summary>
+    /// <exception cref="UsageException">It does not parse.</exception>
+    public static T Parse<T>(string value, string option, Func<string, ParseResult<T>> parse)
+    {
+        var parsed = parse(value);
+        return parsed.Success ? parsed.Value : throw new UsageException($"{option} {value}: {parsed.Error}");
+    }
+
+    /// <summary>A frequency from the command line; the unit is required.</summary>
+    /// <exception cref="UsageException">It does not parse or has no unit.</exception>
+    public static Frequency ParseFrequency(string value, string option)
+    {
+        var f = Parse(value, option, Frequency.Parse);
+        return value.TrimEnd().EndsWith("hz", true, CultureInfo.InvariantCulture) && f.Hertz > 0
+            ? f
+            : throw new UsageException($"{option} {value}: expected a frequency above 0 Hz with its unit, such as \"137.5 MHz\" or 137.5MHz");
+    }
+}
