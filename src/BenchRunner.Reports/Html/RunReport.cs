@@ -68,10 +68,10 @@ public static class RunReport
                     + (group.Count() > 1 ? $"; the last of {group.Count()} sweeps is drawn." : "."));
             }
 
-            if (masks.Count == 0)
+            if (masks.Count == 0 && !brief)
             {
                 yield return TracePlot.Create($"{idPrefix}-plot{++plot}", $"{group.Key} ({last.Record.Trace.Quantity})", last.Record.Trace, null);
-                if (limits is null && !brief)
+                if (limits is null)
                 {
                     yield return E("p", "No mask was recorded with this run, so the trace is drawn alone.");
                 }

@@ -38,11 +38,34 @@ public sealed record NiceScale(double Minimum, double Maximum, double Step)
         return new NiceScale(minimum, maximum == minimum ? minimum + step : maximum, step);
     }
 
-    /// <summary>The tick values from <see cref="Minimum"/> to <see cref="Maximum"/>.</summary>
+    /// <summary>
+    /// A scale that runs exactly from <paramref name="low"/> to <paramref name="high"/> (a swept
+    /// frequency range, say), with round ticks inside it.
+    /// </summary>
+    /// <exception cref="ArgumentException">A value that is not finite, equal ends, or fewer than 2 ticks.</exception>
+    public static NiceScale Exact(double low, double high, int ticks = 6)
+    {
+        var round = Enclosing(low, high, ticks);
+        if (!(high > low))
+        {
+            throw new ArgumentException($"An exact axis needs a lower end below its upper end, not {low} and {high}.");
+        }
+
+        return new NiceScale(low, high, round.Step);
+    }
+
+    /// <summary>The tick values: every whole multiple of <see cref="Step"/> from <see cref="Minimum"/> to <see cref="Maximum"/>.</summary>
     public IReadOnlyList<double> Ticks()
     {
-        var count = (int)Math.Round((Maximum - Minimum) / Step);
-        return Enumerable.Range(0, count + 1).Select(i => Minimum + i * Step).ToList();
+        var first = (long)Math.Ceiling(Minimum / Step - 1e-9);
+        var last = (long)Math.Floor(Maximum / Step + 1e-9);
+        var ticks = new List<double>();
+        for (long i = first; i <= last; i++)
+        {
+            ticks.Add(i * Step);
+        }
+
+        return ticks;
     }
 
     private static double Round(double raw)

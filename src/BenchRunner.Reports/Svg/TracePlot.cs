@@ -27,7 +27,7 @@ public static class TracePlot
         var floor = top - DepthDb;
         var drawn = levels.Select(l => Math.Max(l, floor)).ToList();
         var limits = evaluation is null ? [] : evaluation.UpperLimitsDb.Concat(evaluation.LowerLimitsDb).OfType<double>().ToList();
-        var x = NiceScale.Enclosing(hertz[0] / divisor, hertz[^1] / divisor, 9);
+        var x = hertz.Length > 1 ? NiceScale.Exact(hertz[0] / divisor, hertz[^1] / divisor, 9) : NiceScale.Enclosing(hertz[0] / divisor, hertz[0] / divisor);
         var y = NiceScale.Enclosing(drawn.Concat(limits).Min(), drawn.Concat(limits).Max(), 7);
         var frame = new PlotFrame(id, title, x, y, $"frequency ({unit})", $"{trace.Quantity} ({trace.UnitSymbol})");
 
@@ -49,6 +49,8 @@ public static class TracePlot
         }
 
         frame.Content.Add(frame.Line(hertz.Select((h, i) => (h / divisor, drawn[i])), "trace"));
+        frame.Root.Add(SvgNames.Element("text", SvgNames.Attr("x", frame.Width - 16), SvgNames.Attr("y", frame.Height - 8), SvgNames.Attr("text-anchor", "end"), SvgNames.Attr("class", "tick"),
+            evaluation is null ? "" : "dashed: mask · shaded: fails"));
         return frame.Root;
     }
 
