@@ -40,12 +40,14 @@ public static class CliApplication
 
         try
         {
-            return parsed.Invoke(new InvocationConfiguration
+            // InvokeAsync: only the asynchronous path turns Ctrl+C into cancellation (the sync one lets the signal end the process).
+            return parsed.InvokeAsync(new InvocationConfiguration
             {
                 Output = console.Out,
                 Error = console.Error,
                 EnableDefaultExceptionHandler = false,
-            });
+                ProcessTerminationTimeout = TimeSpan.FromSeconds(5),
+            }).GetAwaiter().GetResult();
         }
         catch (Exception ex) when (ex is InputFormatException or UsageException)
         {

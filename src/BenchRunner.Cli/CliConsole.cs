@@ -11,4 +11,7 @@ public sealed record CliConsole(TextWriter Out, TextWriter Error, bool UseColour
 {
     /// <summary>What the operator types or scans (standard input); empty unless set.</summary>
     public TextReader In { get; init; } = TextReader.Null;
+
+    /// <summary>True when <see cref="In"/> is a terminal, which shows what is typed; otherwise answers to prompts are echoed.</summary>
+    public bool InIsTerminal { get; init; }
 }

@@ -9,6 +9,7 @@ public static class Program
         var console = new CliConsole(Console.Out, Console.Error, UseColour: !Console.IsOutputRedirected && Environment.GetEnvironmentVariable("NO_COLOR") is null)
         {
             In = Console.In,
+            InIsTerminal = !Console.IsInputRedirected,
         };
         return CliApplication.Run(args, console);
     }

@@ -8,7 +8,8 @@ namespace BenchRunner.Cli.Batch;
 /// </summary>
 /// <param name="input">What the operator types.</param>
 /// <param name="prompt">Where the request is written.</param>
-public sealed class OperatorFixture(TextReader input, TextWriter prompt) : IBoardFixture
+/// <param name="echo">Write each answer after the request (when the input is not a terminal, which would show it).</param>
+public sealed class OperatorFixture(TextReader input, TextWriter prompt, bool echo = false) : IBoardFixture
 {
     /// <summary>The word that leaves a board untested.</summary>
     public const string SkipWord = "skip";
@@ -18,7 +19,13 @@ public sealed class OperatorFixture(TextReader input, TextWriter prompt) : IBoar
     {
         prompt.Write($"Connect board {serial} to the bench, then press Enter (or type {SkipWord} to leave it untested): ");
         prompt.Flush();
-        var answer = await input.ReadLineAsync(cancellationToken).AsTask().WaitAsync(cancellationToken).ConfigureAwait(false);
+        // Console input reads synchronously and cannot be interrupted: read on the pool and stop waiting on Ctrl+C.
+        var answer = await Task.Run(input.ReadLine, CancellationToken.None).WaitAsync(cancellationToken).ConfigureAwait(false);
+        if (echo)
+        {
+            prompt.WriteLine(answer ?? "");
+        }
+
         return answer switch
         {
             null => FixtureResult.NotReady("the input ended before the board was confirmed as connected"),

@@ -19,9 +19,11 @@ public sealed class SerialSource
     private readonly TextReader? _reader;
     private readonly TextWriter? _prompt;
     private readonly TextWriter? _messages;
+    private readonly bool _echo;
 
-    private SerialSource(Queue<string>? listed, TextReader? reader, TextWriter? prompt, TextWriter? messages)
+    private SerialSource(Queue<string>? listed, TextReader? reader, TextWriter? prompt, TextWriter? messages, bool echo = false)
     {
+        _echo = echo;
         _listed = listed;
         _reader = reader;
         _prompt = prompt;
@@ -71,8 +73,9 @@ public sealed class SerialSource
     /// <param name="reader">Standard input, or any reader.</param>
     /// <param name="prompt">Where to ask for each serial, or null to read without asking (a pipe).</param>
     /// <param name="messages">Where to say why a line was refused.</param>
-    public static SerialSource FromReader(TextReader reader, TextWriter? prompt, TextWriter messages) =>
-        new(null, reader ?? throw new ArgumentNullException(nameof(reader)), prompt, messages ?? throw new ArgumentNullException(nameof(messages)));
+    /// <param name="echo">Write each line read after the prompt (when the input is not a terminal, which would show it).</param>
+    public static SerialSource FromReader(TextReader reader, TextWriter? prompt, TextWriter messages, bool echo = false) =>
+        new(null, reader ?? throw new ArgumentNullException(nameof(reader)), prompt, messages ?? throw new ArgumentNullException(nameof(messages)), echo);
 
     /// <summary>The next serial, or null at the end of the lot.</summary>
     /// <exception cref="OperationCanceledException">Cancelled while waiting for input.</exception>
@@ -87,8 +90,15 @@ public sealed class SerialSource
         {
             _prompt?.Write(Prompt);
             _prompt?.Flush();
-            // A console read cannot be interrupted; waiting on it lets Ctrl+C end the batch at once.
-            var line = await _reader!.ReadLineAsync(cancellationToken).AsTask().WaitAsync(cancellationToken).ConfigureAwait(false);
+            // Console input reads synchronously and cannot be interrupted: read on the pool and stop
+            // waiting on Ctrl+C, so the batch ends at once.
+            var reader = _reader!;
+            var line = await Task.Run(reader.ReadLine, CancellationToken.None).WaitAsync(cancellationToken).ConfigureAwait(false);
+            if (_echo && _prompt is not null)
+            {
+                _prompt.WriteLine(line ?? "");
+            }
+
             if (line is null || line.Trim().Length == 0)
             {
                 return null;

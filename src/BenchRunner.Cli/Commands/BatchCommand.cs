@@ -61,7 +61,7 @@ public static class BatchCommand
             var validated = PlanValidator.Load(planPath, benchPath);
             var source = parsed.GetValue(serials) switch
             {
-                null => SerialSource.FromReader(console.In, console.Error, console.Error),
+                null => SerialSource.FromReader(console.In, console.Error, console.Error, echo: !console.InIsTerminal),
                 "-" => SerialSource.FromReader(console.In, null, console.Error),
                 var file => SerialSource.FromFile(file),
             };
@@ -81,10 +81,12 @@ public static class BatchCommand
 
             var results = new List<BoardResult>();
             bool stopped = false;
+            string? current = null;
             try
             {
                 while (await source.NextAsync(cancellationToken).ConfigureAwait(false) is { } serial)
                 {
+                    current = serial;
                     var result = await session.TestAsync(serial, null, cancellationToken).ConfigureAwait(false);
                     results.Add(result);
                     view.Board(result);
@@ -94,6 +96,7 @@ public static class BatchCommand
                         break;
                     }
 
+                    current = null;
                     view.Progress(LotSummary.Read(store, lotName));
                 }
             }
@@ -105,7 +108,10 @@ public static class BatchCommand
             var summary = LotSummary.Read(store, lotName);
             if (stopped)
             {
-                console.Error.WriteLine("Stopped by the operator; the board in the fixture was left untested, and every verdict so far is kept.");
+                console.Error.WriteLine();
+                console.Error.WriteLine(current is null
+                    ? "Stopped by the operator while waiting for a serial; every verdict so far is kept."
+                    : $"Stopped by the operator: {current} was left untested; every verdict so far is kept.");
             }
 
             if (asJson)
@@ -135,6 +141,6 @@ public static class BatchCommand
             return (factory, new VirtualLotFixture(virtualBench, BoardLot.Generate()));
         }
 
-        return (transports(), new OperatorFixture(console.In, console.Error));
+        return (transports(), new OperatorFixture(console.In, console.Error, echo: !console.InIsTerminal));
     }
 }
