@@ -27,7 +27,7 @@ public static class BatchCommand
     public static Command Create(CliConsole console, Func<TransportFactory> transports)
     {
         var plan = new Argument<string>("PLAN") { Description = "The test plan every board is tested with (docs/plan-format.md)." };
-        var lot = new Option<string>("--lot") { Description = "The lot the boards belong to, e.g. PSF-24-L07; a board tested again in the same lot is a retest.", HelpName = "LOT", Required = true };
+        var lot = new Option<string>("--lot") { Description = "The lot the boards belong to, e.g. PSF-24-L07. A board that already has a verdict in the result file is tested as a retest.", HelpName = "LOT", Required = true };
         var bench = new Option<string?>("--bench")
         {
             Description = "The bench file (docs/bench-format.md). Default: the built-in virtual bench, whose fixture holds the simulated lot PSF-24-0001 to PSF-24-0020.",
