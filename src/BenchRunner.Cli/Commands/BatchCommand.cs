@@ -97,7 +97,7 @@ public static class BatchCommand
                     }
 
                     current = null;
-                    view.Progress(LotSummary.Read(store, lotName));
+                    view.Progress(LotSummary.Read(store, lotName, withFigures: false));
                 }
             }
             catch (OperationCanceledException) when (cancellationToken.IsCancellationRequested)

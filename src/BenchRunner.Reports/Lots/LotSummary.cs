@@ -42,8 +42,11 @@ public sealed class LotSummary
     public IReadOnlyList<StoredRun> Runs { get; }
 
     /// <summary>Reads lot <paramref name="lot"/> from <paramref name="store"/>.</summary>
+    /// <param name="store">The result file.</param>
+    /// <param name="lot">The lot's name.</param>
+    /// <param name="withFigures">False to skip the figure spreads (which read every board's sweeps), e.g. for a progress line.</param>
     /// <exception cref="ResultStoreException">The file cannot be read.</exception>
-    public static LotSummary Read(ResultStore store, string lot)
+    public static LotSummary Read(ResultStore store, string lot, bool withFigures = true)
     {
         ArgumentNullException.ThrowIfNull(store);
         ArgumentException.ThrowIfNullOrWhiteSpace(lot);
@@ -71,7 +74,7 @@ public sealed class LotSummary
         var yield = boards.Count == 0 ? null
             : LotYield.From(boards.Select(b => new BoardHistory(b.Serial,
                 b.Runs.Select((r, i) => new BoardTest(r.Status == RunStatus.Passed, b.FailedChecks[i])).ToList())));
-        return new LotSummary(lot, boards, untested, yield, Spreads(store, boards), runs);
+        return new LotSummary(lot, boards, untested, yield, withFigures ? Spreads(store, boards) : [], runs);
     }
 
     private static List<FigureSpread> Spreads(ResultStore store, IReadOnlyList<LotBoard> boards)

@@ -49,8 +49,12 @@ public static class TracePlot
         }
 
         frame.Content.Add(frame.Line(hertz.Select((h, i) => (h / divisor, drawn[i])), "trace"));
-        frame.Root.Add(SvgNames.Element("text", SvgNames.Attr("x", frame.Width - 16), SvgNames.Attr("y", frame.Height - 8), SvgNames.Attr("text-anchor", "end"), SvgNames.Attr("class", "tick"),
-            evaluation is null ? "" : "dashed: mask · shaded: fails"));
+        if (evaluation is not null)
+        {
+            frame.Root.Add(Element("text", Attr("x", frame.Width - 16), Attr("y", frame.Height - 8), Attr("text-anchor", "end"), Attr("class", "tick"),
+                "dashed: mask · shaded: fails"));
+        }
+
         return frame.Root;
     }
 

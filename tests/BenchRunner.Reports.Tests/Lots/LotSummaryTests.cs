@@ -105,6 +105,20 @@ public sealed class LotSummaryTests
     }
 
     [Fact]
+    public void Read_WithoutFigures_KeepsTheYieldAndSkipsTheSpreads()
+    {
+        using var lot = new LotStore();
+        lot.AddRun("PSF-24-0001", RunStatus.Passed);
+        lot.AddRun("PSF-24-0002", RunStatus.Failed, [Mask]);
+
+        var summary = LotSummary.Read(lot.Store, "PSF-24-L07", withFigures: false);
+
+        Assert.Equal(0.5, summary.Yield!.Yield);
+        Assert.Empty(summary.Figures);
+        Assert.NotEmpty(LotSummary.Read(lot.Store, "PSF-24-L07").Figures);
+    }
+
+    [Fact]
     public void Read_UnknownLot_HasNoBoardsAndNoYield()
     {
         using var lot = new LotStore();
