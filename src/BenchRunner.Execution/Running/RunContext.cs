@@ -21,6 +21,6 @@ public sealed record RunContext(string PlanText, string? BenchText, string Softw
     /// <summary>Whether this board was tested before.</summary>
     public bool IsRetest { get; init; }
 
-    /// <summary>What kind of run it is; <see cref="RunMode.Single"/> unless a batch or tuning session says otherwise.</summary>
+    /// <summary>The kind of run recorded; <see cref="RunMode.Single"/> by default.</summary>
     public RunMode Mode { get; init; } = RunMode.Single;
 }
