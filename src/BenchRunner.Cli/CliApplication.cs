@@ -40,12 +40,14 @@ public static class CliApplication
 
         try
         {
-            return parsed.Invoke(new InvocationConfiguration
+            // InvokeAsync: only the asynchronous path turns Ctrl+C into cancellation (the sync one lets the signal end the process).
+            return parsed.InvokeAsync(new InvocationConfiguration
             {
                 Output = console.Out,
                 Error = console.Error,
                 EnableDefaultExceptionHandler = false,
-            });
+                ProcessTerminationTimeout = TimeSpan.FromSeconds(5),
+            }).GetAwaiter().GetResult();
         }
         catch (Exception ex) when (ex is InputFormatException or UsageException)
         {
@@ -99,6 +101,8 @@ public static class CliApplication
         root.Subcommands.Add(ResultsCommand.Create(console));
         root.Subcommands.Add(ExportCommand.Create(console));
         root.Subcommands.Add(SimCommand.Create(console));
+        root.Subcommands.Add(BatchCommand.Create(console, transports));
+        root.Subcommands.Add(ReportCommand.Create(console));
         return root;
     }
 }

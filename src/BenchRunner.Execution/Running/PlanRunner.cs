@@ -3,6 +3,7 @@ using BenchRunner.Core.Figures;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;
 using BenchRunner.Execution.Bench;
+using BenchRunner.Execution.LimitRecords;
 using BenchRunner.Execution.Plans;
 using BenchRunner.Instruments.Adapters;
 using BenchRunner.Instruments.Capabilities;
@@ -55,7 +56,7 @@ public sealed partial class PlanRunner
         ArgumentNullException.ThrowIfNull(plan);
         ArgumentNullException.ThrowIfNull(context);
         var state = new RunState(observer ?? NullObserver.Instance, _time);
-        long? runId = _store?.StartRun(new RunRecord(RunMode.Single, plan.Name, context.PlanText, context.SoftwareVersion, context.Host)
+        long? runId = _store?.StartRun(new RunRecord(context.Mode, plan.Name, context.PlanText, context.SoftwareVersion, context.Host)
         {
             BenchName = _bench.Name,
             BenchText = context.BenchText,
@@ -63,6 +64,7 @@ public sealed partial class PlanRunner
             DutSerial = context.DutSerial,
             Lot = context.Lot,
             IsRetest = context.IsRetest,
+            ExtraJson = PlanLimits.From(plan).ToRunJson(),
         });
         state.RunId = runId;
         try
