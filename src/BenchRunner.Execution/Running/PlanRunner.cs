@@ -65,6 +65,7 @@ public sealed class PlanRunner
             IsRetest = context.IsRetest,
         });
         state.RunId = runId;
+        state.Emit(now => new RunStarted(now, runId, plan.Name));
         try
         {
             foreach (var role in plan.Roles)
