@@ -21,7 +21,7 @@ public static class DaemonSettingsLoader
     public static IReadOnlyList<(string Key, string Variable)> Variables { get; } =
     [
         (Home, "BENCHRUNNER_HOME"), (Bench, "BENCHRUNNER_BENCH"), (Database, "BENCHRUNNER_DATABASE"),
-        (Inbox, "BENCHRUNNER_INBOX"), (Logs, "BENCHRUNNER_LOGS"), (State, "BENCHRUNNER_STATE"), (LogLevelKey, "BENCHRUNNER_LOG_LEVEL"),
+        (InboxKey, "BENCHRUNNER_INBOX"), (Logs, "BENCHRUNNER_LOGS"), (State, "BENCHRUNNER_STATE"), (LogLevelKey, "BENCHRUNNER_LOG_LEVEL"),
     ];
 
     private static readonly (string Word, LogLevel Value)[] LevelWords =
@@ -55,7 +55,7 @@ public static class DaemonSettingsLoader
         Given(values, Home, commandLine.Home, "--home", currentFolder);
         Given(values, Bench, commandLine.Bench, "--bench", currentFolder);
         Given(values, Database, commandLine.Database, "--db", currentFolder);
-        Given(values, Inbox, commandLine.Inbox, "--inbox", currentFolder);
+        Given(values, InboxKey, commandLine.Inbox, "--inbox", currentFolder);
         Given(values, Logs, commandLine.Logs, "--logs", currentFolder);
         Given(values, State, commandLine.State, "--state", currentFolder);
         Given(values, LogLevelKey, commandLine.LogLevel, "--log-level", currentFolder);
@@ -70,7 +70,7 @@ public static class DaemonSettingsLoader
             values.TryGetValue(key, out var v) ? Path.GetFullPath(v.Text, v.BaseFolder ?? home) : Path.Combine(home, fallback);
         SourceLocation AtOf(string key) => values.TryGetValue(key, out var v) ? v.At : homeAt;
 
-        var folders = new[] { (Inbox, DaemonDefaults.Inbox), (Done, DaemonDefaults.Done), (Rejected, DaemonDefaults.Rejected), (Logs, DaemonDefaults.Logs), (State, DaemonDefaults.State) }
+        var folders = new[] { (InboxKey, DaemonDefaults.Inbox), (Done, DaemonDefaults.Done), (Rejected, DaemonDefaults.Rejected), (Logs, DaemonDefaults.Logs), (State, DaemonDefaults.State) }
             .ToDictionary(f => f.Item1, f => PathOf(f.Item1, f.Item2), StringComparer.Ordinal);
         foreach (var (key, folder) in folders)
         {
@@ -116,7 +116,7 @@ public static class DaemonSettingsLoader
             Home = home,
             BenchPath = benchPath!,
             DatabasePath = database,
-            InboxFolder = folders[Inbox],
+            InboxFolder = folders[InboxKey],
             DoneFolder = folders[Done],
             RejectedFolder = folders[Rejected],
             LogFolder = folders[Logs],
@@ -164,7 +164,7 @@ public static class DaemonSettingsLoader
     private static void CheckDistinct(Dictionary<string, string> folders, Func<string, SourceLocation> atOf, List<InputProblem> problems)
     {
         // The inbox, done and rejected folders must differ, or a finished plan would be taken again.
-        var watched = new[] { Inbox, Done, Rejected };
+        var watched = new[] { InboxKey, Done, Rejected };
         for (int i = 0; i < watched.Length; i++)
         {
             for (int j = i + 1; j < watched.Length; j++)

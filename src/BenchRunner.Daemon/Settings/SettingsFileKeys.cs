@@ -6,7 +6,7 @@ internal static class SettingsFileKeys
     public const string Home = "home";
     public const string Bench = "bench";
     public const string Database = "database";
-    public const string Inbox = "inbox";
+    public const string InboxKey = "inbox";
     public const string Done = "done";
     public const string Rejected = "rejected";
     public const string Logs = "logs";
@@ -30,7 +30,7 @@ internal static class SettingsFileKeys
     public const string TimeLimit = "time-limit";
 
     /// <summary>The keys that hold one path or word each, which the environment and the command line may also give.</summary>
-    public static readonly string[] Simple = [Home, Bench, Database, Inbox, Done, Rejected, Logs, State, LogLevelKey];
+    public static readonly string[] Simple = [Home, Bench, Database, InboxKey, Done, Rejected, Logs, State, LogLevelKey];
 
     public static readonly string[] Top = [.. Simple, Timing, InstrumentRetry, Schedules];
 
