@@ -32,11 +32,11 @@ internal static partial class DaemonLog
     [LoggerMessage(12, LogLevel.Information, "Run {RunId} started: job {JobId}, plan {Plan}, instruments {Instruments}, attempt {Attempt}")]
     public static partial void RunStarted(ILogger log, long? runId, string jobId, string plan, string instruments, int attempt);
 
-    [LoggerMessage(13, LogLevel.Information, "Run {RunId}: sweep {Trace} from {Instrument} stored ({Quantity}, {Points} points)")]
-    public static partial void SweepStored(ILogger log, long? runId, string trace, string instrument, string quantity, int points);
+    [LoggerMessage(13, LogLevel.Information, "Run {RunId} on {Instruments}: sweep {Trace} from {Instrument} stored ({Quantity}, {Points} points)")]
+    public static partial void SweepStored(ILogger log, long? runId, string instruments, string trace, string instrument, string quantity, int points);
 
-    [LoggerMessage(14, LogLevel.Information, "Run {RunId}: check {Check} {Verdict}: {Detail}")]
-    public static partial void CheckVerdict(ILogger log, long? runId, string check, string verdict, string detail);
+    [LoggerMessage(14, LogLevel.Information, "Run {RunId} on {Instruments}: check {Check} {Verdict}: {Detail}")]
+    public static partial void CheckVerdict(ILogger log, long? runId, string instruments, string check, string verdict, string detail);
 
     [LoggerMessage(15, LogLevel.Information, "Run {RunId} finished: plan {Plan} on {Instruments} {Status}, {PassedChecks} of {Checks} checks passed{ErrorText}")]
     public static partial void RunFinished(ILogger log, long? runId, string plan, string instruments, string status, int passedChecks, int checks, string errorText);
@@ -44,11 +44,11 @@ internal static partial class DaemonLog
     [LoggerMessage(16, LogLevel.Information, "Plan file {PlanFile} done; moved to {Target}")]
     public static partial void Filed(ILogger log, string planFile, string target);
 
-    [LoggerMessage(17, LogLevel.Information, "Run {RunId}: message: {Text}")]
-    public static partial void OperatorMessage(ILogger log, long? runId, string text);
+    [LoggerMessage(17, LogLevel.Information, "Run {RunId} on {Instruments}: message: {Text}")]
+    public static partial void OperatorMessage(ILogger log, long? runId, string instruments, string text);
 
-    [LoggerMessage(18, LogLevel.Information, "Run {RunId}: stopping ({Reason}); the sweep in flight is finished first")]
-    public static partial void StopRequested(ILogger log, long? runId, string reason);
+    [LoggerMessage(18, LogLevel.Information, "Run {RunId} on {Instruments}: stopping ({Reason}); the sweep in flight is finished first")]
+    public static partial void StopRequested(ILogger log, long? runId, string instruments, string reason);
 
     [LoggerMessage(19, LogLevel.Warning, "Job {JobId} ({Plan}) will run again once {Instruments} answer (attempt {Attempt} of {Attempts})")]
     public static partial void WillRetry(ILogger log, string jobId, string plan, string instruments, int attempt, int attempts);
@@ -77,8 +77,8 @@ internal static partial class DaemonLog
     [LoggerMessage(32, LogLevel.Error, "Schedule {Schedule} cannot run its plan now: {Problem}")]
     public static partial void ScheduleInvalid(ILogger log, string schedule, string problem);
 
-    [LoggerMessage(33, LogLevel.Warning, "Run {RunId} reached its time limit of {LimitSeconds} s; stopping it")]
-    public static partial void TimeLimit(ILogger log, long? runId, double limitSeconds);
+    [LoggerMessage(33, LogLevel.Warning, "Run {RunId} on {Instruments} reached its time limit of {LimitSeconds} s; stopping it")]
+    public static partial void TimeLimit(ILogger log, long? runId, string instruments, double limitSeconds);
 
     [LoggerMessage(40, LogLevel.Warning, "The status file {StatusFile} cannot be written: {Error}")]
     public static partial void StatusUnwritable(ILogger log, string statusFile, string error);
