@@ -98,6 +98,8 @@ public static class CliApplication
         root.Subcommands.Add(ResultsCommand.Create(console));
         root.Subcommands.Add(ExportCommand.Create(console));
         root.Subcommands.Add(SimCommand.Create(console));
+        root.Subcommands.Add(ServeCommand.Create(console, transports));
+        root.Subcommands.Add(StatusCommand.Create(console));
         return root;
     }
 }

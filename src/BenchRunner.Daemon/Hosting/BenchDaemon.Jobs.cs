@@ -80,12 +80,6 @@ public sealed partial class BenchDaemon
             };
             Status.Finish(finished);
             JobFinished?.Invoke(finished);
-            return;
-        }
-
-        if (job.FromInbox)
-        {
-            _taken.TryRemove(job.PlanPath, out _);
         }
     }
 
@@ -94,6 +88,8 @@ public sealed partial class BenchDaemon
         using var gate = new StopGate(_time);
         var observer = new RunLogObserver(_log, job, attempt, Status, _time);
         var names = string.Join(", ", job.Instruments);
+        // Every event of the run carries the job, plan and instruments as properties in the log files.
+        using var scope = _log.BeginScope(new Dictionary<string, object> { ["JobId"] = job.Id, ["Plan"] = job.Plan.Name, ["Instruments"] = names, ["Origin"] = job.Origin });
         _running[job.Id] = (gate, observer, job);
         using var stopRegistration = stopping.Register(() => gate.RequestStop("the daemon is stopping", _settings.StopWithin));
         using var limit = job.TimeLimit is { } timeLimit
@@ -131,6 +127,7 @@ public sealed partial class BenchDaemon
                 var summary = RunSummary.Text(job, outcome, _settings.DatabasePath, started, _time.GetUtcNow(), attempt, stopReason);
                 filedAs = PlanFiler.FileAsDone(job.PlanPath, _settings.DoneFolder, summary);
                 DaemonLog.Filed(_log, job.PlanPath, filedAs);
+                _taken.TryRemove(job.PlanPath, out _);
             }
             catch (Exception e) when (e is IOException or UnauthorizedAccessException)
             {

@@ -37,8 +37,9 @@ public static class DaemonHost
     {
         ArgumentNullException.ThrowIfNull(settings);
         using var host = Build(settings, transports, softwareVersion, extraSink);
+        var worker = host.Services.GetServices<IHostedService>().OfType<DaemonWorker>().Single();
         await host.RunAsync().ConfigureAwait(false);
-        return host.Services.GetServices<IHostedService>().OfType<DaemonWorker>().Single().Failure;
+        return worker.Failure;
     }
 
     /// <summary>Builds the host without starting it.</summary>

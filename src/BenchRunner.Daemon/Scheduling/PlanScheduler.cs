@@ -65,7 +65,7 @@ internal sealed class PlanScheduler
                 }
                 else
                 {
-                    DaemonLog.ScheduleDue(_log, _schedule.Name, due, Math.Round((_time.GetUtcNow() - due).TotalSeconds, 3));
+                    DaemonLog.ScheduleDue(_log, _schedule.Name, due, Math.Round(Math.Max(0, (_time.GetUtcNow() - due).TotalSeconds), 3));
                     previous = await _start(_schedule, due, stopping).ConfigureAwait(false);
                 }
 
