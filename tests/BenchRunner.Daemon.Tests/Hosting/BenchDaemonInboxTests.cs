@@ -108,4 +108,31 @@ public sealed class BenchDaemonInboxTests
         Assert.Empty(final.Running);
         Assert.Equal("stopped", Assert.Single(final.Recent).Status);
     }
+
+    [Fact]
+    public async Task PlanThatWouldOverdriveAnAnalyser_IsRejectedOnArrival_BeforeAnythingIsSent()
+    {
+        await using var rig = new DaemonRig();
+        rig.Start();
+        // +10 dBm through the bench's -1 dB cable reaches the analyser at +9 dBm, above its declared 0 dBm maximum.
+        rig.Drop("hot.yaml", """
+            plan: hot-carrier
+            roles:
+              gen: signal-generator
+              sa: spectrum-analyser
+            steps:
+              - set-generator:
+                  role: gen
+                  frequency: 137.5 MHz
+                  level: +10 dBm
+                  output: on
+            """);
+
+        var finished = await rig.WaitForFinishedAsync("hot.yaml");
+
+        Assert.Equal("rejected", finished.Status);
+        var errors = await File.ReadAllTextAsync(finished.FiledAs + PlanFiler.ErrorsSuffix);
+        Assert.Contains("never exceed", errors, StringComparison.OrdinalIgnoreCase);
+        Assert.Empty(rig.Log.Named("RunStarted"));
+    }
 }
