@@ -127,11 +127,15 @@ public sealed partial class BenchDaemon
                 var summary = RunSummary.Text(job, outcome, _settings.DatabasePath, started, _time.GetUtcNow(), attempt, stopReason);
                 filedAs = PlanFiler.FileAsDone(job.PlanPath, _settings.DoneFolder, summary);
                 DaemonLog.Filed(_log, job.PlanPath, filedAs);
-                _taken.TryRemove(job.PlanPath, out _);
             }
             catch (Exception e) when (e is IOException or UnauthorizedAccessException)
             {
                 DaemonLog.InboxTrouble(_log, _settings.InboxFolder, e.Message);
+            }
+            finally
+            {
+                // Free again: a plan dropped later under the same name is a new plan.
+                _taken.TryRemove(job.PlanPath, out _);
             }
         }
         else if (job.Origin.StartsWith("schedule ", StringComparison.Ordinal))

@@ -21,8 +21,9 @@ internal static class PlanFiler
     public static string FileAsDone(string planPath, string doneFolder, string summary)
     {
         var target = FreeName(doneFolder, Path.GetFileName(planPath));
-        WriteBeside(target + ResultSuffix, summary);
+        // Moved first: if the plan has vanished meanwhile, no summary is left without its plan.
         File.Move(planPath, target);
+        WriteBeside(target + ResultSuffix, summary);
         return target;
     }
 
@@ -35,8 +36,8 @@ internal static class PlanFiler
     {
         var target = FreeName(rejectedFolder, Path.GetFileName(planPath));
         var lines = problems.Select(p => p.Location.File == planPath ? p with { Location = p.Location with { File = target } } : p);
-        WriteBeside(target + ErrorsSuffix, string.Join('\n', lines) + "\n");
         File.Move(planPath, target);
+        WriteBeside(target + ErrorsSuffix, string.Join('\n', lines) + "\n");
         return target;
     }
 
