@@ -64,11 +64,10 @@ public sealed partial class BenchDaemon
         Leases = new InstrumentLeases(time);
         _health = new InstrumentHealthBoard(_bench, ProbeAsync, Leases, new Backoff(settings.RetryFirst, settings.RetryLongest), time, _log);
         Leases.Changed += _ => Status.Touch();
-        var identity = System.Diagnostics.Process.GetCurrentProcess();
         Identity = new DaemonStatus
         {
             State = "starting",
-            ProcessId = identity.Id,
+            ProcessId = Environment.ProcessId,
             Host = Environment.MachineName,
             StartedUtc = time.GetUtcNow(),
             UpdatedUtc = time.GetUtcNow(),
