@@ -103,6 +103,8 @@ public static class CliApplication
         root.Subcommands.Add(SimCommand.Create(console));
         root.Subcommands.Add(BatchCommand.Create(console, transports));
         root.Subcommands.Add(ReportCommand.Create(console));
+        root.Subcommands.Add(ServeCommand.Create(console, transports));
+        root.Subcommands.Add(StatusCommand.Create(console));
         return root;
     }
 }

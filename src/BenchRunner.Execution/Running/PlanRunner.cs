@@ -67,6 +67,7 @@ public sealed partial class PlanRunner
             ExtraJson = PlanLimits.From(plan).ToRunJson(),
         });
         state.RunId = runId;
+        state.Emit(now => new RunStarted(now, runId, plan.Name));
         try
         {
             foreach (var role in plan.Roles)
