@@ -1,3 +1,5 @@
+using BenchRunner.Storage;
+
 namespace BenchRunner.Execution.Running;
 
 /// <summary>What is recorded with a run besides the plan itself.</summary>
@@ -18,4 +20,7 @@ public sealed record RunContext(string PlanText, string? BenchText, string Softw
 
     /// <summary>Whether this board was tested before.</summary>
     public bool IsRetest { get; init; }
+
+    /// <summary>The kind of run recorded; <see cref="RunMode.Single"/> by default.</summary>
+    public RunMode Mode { get; init; } = RunMode.Single;
 }
