@@ -95,6 +95,7 @@ public static class CliApplication
         root.Subcommands.Add(IdentifyCommand.Create(console, transports));
         root.Subcommands.Add(ReplayCommand.Create(console));
         root.Subcommands.Add(RunCommand.Create(console, transports));
+        root.Subcommands.Add(TuneCommand.Create(console, transports));
         root.Subcommands.Add(ResultsCommand.Create(console));
         root.Subcommands.Add(ExportCommand.Create(console));
         root.Subcommands.Add(SimCommand.Create(console));
