@@ -207,7 +207,7 @@ public sealed class TuningSessionTests
         var centre = second.Single(f => f.Key == "center_hz");
         Assert.Equal(centre.Value - first.Single(f => f.Key == "center_hz").Value, centre.Change);
         Assert.Equal(137.5e6, centre.Limit!.Target);
-        // At the start the detuned board's centre is far below 137.5 MHz (middle trimmer 0.77 pF low).
+        // At the start the detuned board (middle trimmer 0.77 pF low) is centred well above 137.5 MHz.
         Assert.False(first.Single(f => f.Key == "center_hz").Inside);
         Assert.Null(first.Single(f => f.Key == "loaded_q").Limit);
         Assert.NotNull(observer.Passes[0].Mask);
