@@ -37,9 +37,9 @@ public static class TuneCommand
             Arity = ArgumentArity.ZeroOrOne,
         };
         var bench = new Option<string?>("--bench") { Description = "The bench file naming the instruments (docs/bench-format.md); needed with PLAN.", HelpName = "BENCH" };
-        var sweeps = new Option<int>("--settle-sweeps") { Description = $"Settled after this many consecutive sweeps inside every target. Default {SettleOptions.DefaultSweeps}.", HelpName = "N", DefaultValueFactory = _ => SettleOptions.DefaultSweeps };
-        var time = new Option<double>("--settle-time") { Description = $"... and only once they have stayed inside this long, in seconds. Default {SettleOptions.DefaultMinimumTime.TotalSeconds}.", HelpName = "SECONDS", DefaultValueFactory = _ => SettleOptions.DefaultMinimumTime.TotalSeconds };
-        var interval = new Option<double>("--interval") { Description = $"Least time from one sweep's start to the next, in seconds; 0 sweeps as fast as the instrument can. Default {TuningOptions.DefaultInterval.TotalSeconds}.", HelpName = "SECONDS", DefaultValueFactory = _ => TuningOptions.DefaultInterval.TotalSeconds };
+        var sweeps = new Option<int>("--settle-sweeps") { Description = "Settled after this many consecutive sweeps inside every target.", HelpName = "N", DefaultValueFactory = _ => SettleOptions.DefaultSweeps };
+        var time = new Option<double>("--settle-time") { Description = "Settled only once every target has also stayed inside this long, in seconds.", HelpName = "SECONDS", DefaultValueFactory = _ => SettleOptions.DefaultMinimumTime.TotalSeconds };
+        var interval = new Option<double>("--interval") { Description = "Least time from one sweep's start to the next, in seconds; 0 sweeps as fast as the instrument can.", HelpName = "SECONDS", DefaultValueFactory = _ => TuningOptions.DefaultInterval.TotalSeconds };
         var stop = new Option<bool>("--stop-when-settled") { Description = "End the session by itself once settled (the demo always does). Otherwise it runs until Ctrl+C." };
         var bell = new Option<bool>("--bell") { Description = "Ring the terminal bell when the response settles." };
         var max = new Option<int?>("--max-sweeps") { Description = "End after this many sweeps whatever happens.", HelpName = "N" };
@@ -47,8 +47,8 @@ public static class TuneCommand
         var db = new Option<string?>("--db") { Description = $"The result database (created if missing). Default {ResultsCommand.DefaultDatabase}; {DemoCommand.DefaultDatabase} for the demo.", HelpName = "FILE" };
         var dut = new Option<string?>("--dut") { Description = "The board's serial number, stored with the run.", HelpName = "SERIAL" };
         var op = new Option<string?>("--operator") { Description = "Who tunes the board.", HelpName = "NAME" };
-        var turn = new Option<double>("--turn-time") { Description = $"Demo only: how long the virtual technician takes to turn the trimmer, in seconds. Default {TuningDemo.DefaultTurnTime.TotalSeconds}.", HelpName = "SECONDS", DefaultValueFactory = _ => TuningDemo.DefaultTurnTime.TotalSeconds };
-        var seed = new Option<int>("--seed") { Description = "Demo only: seeds the virtual bench's noise. Default 1.", DefaultValueFactory = _ => 1 };
+        var turn = new Option<double>("--turn-time") { Description = "Demo only: how long the virtual technician takes to turn the trimmer, in seconds.", HelpName = "SECONDS", DefaultValueFactory = _ => TuningDemo.DefaultTurnTime.TotalSeconds };
+        var seed = new Option<int>("--seed") { Description = "Demo only: seeds the virtual bench's noise.", HelpName = "N", DefaultValueFactory = _ => 1 };
         var json = CommonOptions.Json();
         var command = new Command("tune", "Sweep continuously while you turn the trimmers: live figures with their change and target, a plot against the mask, and word when the response has settled. Every sweep is stored. Without PLAN, a demo on the virtual bench.")
         {
@@ -89,7 +89,8 @@ public static class TuneCommand
                 planPath = Path.Combine(files.Folder, DemoPlan);
                 benchPath = files.Bench;
                 var virtualBench = TuningDemo.CreateBench(parsed.GetValue(seed), TimeProvider.System, Seconds(parsed.GetValue(turn), "--turn-time", allowZero: false));
-                factory = SimulatorConnections.Register(new TransportFactory(), new VirtualBenchServers(virtualBench), cancellationToken);
+                // Not stopped by Ctrl+C: each in-process server ends when its connection closes, after the run is finished.
+                factory = SimulatorConnections.Register(new TransportFactory(), new VirtualBenchServers(virtualBench));
             }
             else
             {
@@ -122,7 +123,8 @@ public static class TuneCommand
             }
 
             var session = new TuningSession(new PlanRunner(validated.Bench, factory, store), options);
-            var outcome = await session.RunAsync(validated.Plan, context, view, null, cancellationToken).ConfigureAwait(false);
+            using var signals = new StopSignal(cancellationToken);
+            var outcome = await session.RunAsync(validated.Plan, context, view, null, signals.Token).ConfigureAwait(false);
             if (asJson)
             {
                 WriteJson(outcome, dbPath, console.Out);
