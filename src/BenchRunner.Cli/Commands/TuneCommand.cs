@@ -5,6 +5,7 @@ using System.Text.Json.Nodes;
 using BenchRunner.Cli.Demo;
 using BenchRunner.Cli.Results;
 using BenchRunner.Cli.Tune;
+using BenchRunner.Execution.Plans;
 using BenchRunner.Execution.Running;
 using BenchRunner.Execution.Tuning;
 using BenchRunner.Execution.Validation;
@@ -98,6 +99,10 @@ public static class TuneCommand
             }
 
             var validated = PlanValidator.Load(planPath!, benchPath);
+            if (!validated.Plan.AllSteps().OfType<SweepStep>().Any())
+            {
+                throw new UsageException($"{planPath}: the plan has no sweep step, so there is nothing to tune against; add a sweep and the checks to watch.");
+            }
             var dbPath = parsed.GetValue(db) ?? (demo ? DemoCommand.DefaultDatabase : ResultsCommand.DefaultDatabase);
             using var store = ResultStoreOpener.Open(dbPath);
             var context = new RunContext(File.ReadAllText(planPath!), File.ReadAllText(benchPath!), RunCommand.ThisVersion(), Environment.MachineName)

@@ -117,6 +117,25 @@ public sealed partial class TuneCommandTests
     }
 
     [Fact]
+    public void Tune_PlanWithoutASweep_IsBadInput()
+    {
+        using var dir = new TempDirectory();
+        var plan = dir.Write("talk.yaml", """
+            plan: talk
+            roles:
+              vna: network-analyser
+            steps:
+              - message: Nothing to measure here.
+            """);
+
+        var run = CliRun.Of("tune", plan, "--bench", Bench, "--db", dir.PathOf("tune.db"));
+
+        Assert.Equal(2, run.ExitCode);
+        Assert.Contains("no sweep step", run.Error);
+        Assert.False(File.Exists(dir.PathOf("tune.db")));
+    }
+
+    [Fact]
     public void Tune_OnATerminal_RedrawsAFramePerSweepWithTheFiguresAndThePlot()
     {
         using var dir = new TempDirectory();
