@@ -125,6 +125,8 @@ public static class TuneCommand
                 {
                     report.WriteLine("Demo: a virtual technician turns the middle trimmer of the detuned board PSF-24-0002 towards alignment.");
                 }
+
+                report.WriteLine(DemoCommand.SafetyNote);
             }
 
             var session = new TuningSession(new PlanRunner(validated.Bench, factory, store), options);
@@ -136,7 +138,7 @@ public static class TuneCommand
             }
             else
             {
-                WriteSummary(outcome, dbPath, report);
+                WriteSummary(outcome, dbPath, report, safety: live);
             }
 
             return outcome.Run.Status switch
@@ -160,7 +162,7 @@ public static class TuneCommand
         return TimeSpan.FromSeconds(seconds);
     }
 
-    private static void WriteSummary(TuningOutcome outcome, string db, TextWriter writer)
+    private static void WriteSummary(TuningOutcome outcome, string db, TextWriter writer, bool safety)
     {
         writer.WriteLine();
         var how = outcome.Run.Status switch
@@ -178,7 +180,11 @@ public static class TuneCommand
             writer.WriteLine($"Every sweep is stored as run {id} in {db}; 'benchrunner results --db {db} --run {id}' shows the trajectory.");
         }
 
-        writer.WriteLine(DemoCommand.SafetyNote);
+        if (safety)
+        {
+            // The live view cleared the screen the note would have been on.
+            writer.WriteLine(DemoCommand.SafetyNote);
+        }
     }
 
     private static void WriteJson(TuningOutcome outcome, string db, TextWriter writer)

@@ -16,6 +16,9 @@ public sealed class TuningLiveView : ITuningObserver
     private const string ClearLine = "\u001b[K";
     private const string ClearBelow = "\u001b[J";
 
+    /// <summary>The short caution at the foot of every frame.</summary>
+    public const string Caution = "Caution: use an insulated trimming tool, keep within every input's maximum level, mind ESD.";
+
     private readonly TextWriter _writer;
     private readonly string _title;
     private readonly SettleOptions _rule;
@@ -96,6 +99,8 @@ public sealed class TuningLiveView : ITuningObserver
             lines.Add($"  outside: {string.Join("; ", pass.FailedChecks)}");
         }
 
+        lines.Add("");
+        lines.Add($"  {Caution}");
         return lines;
     }
 }

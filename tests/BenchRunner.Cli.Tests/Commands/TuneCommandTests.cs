@@ -24,6 +24,8 @@ public sealed partial class TuneCommandTests
 
         Assert.Equal(0, run.ExitCode);
         Assert.DoesNotContain("\u001b", run.Out);
+        // The cautions come before the first sweep.
+        Assert.Contains("Safety:", run.Out[..run.Out.IndexOf("sweep 1 ", StringComparison.Ordinal)]);
         var lines = SweepLine().Matches(run.Out).Select(m => int.Parse(m.Groups[1].Value)).ToList();
         Assert.Equal(Enumerable.Range(1, lines.Count), lines);
         var settled = Regex.Match(run.Out, @"settled at sweep (\d+):");
@@ -155,5 +157,8 @@ public sealed partial class TuneCommandTests
         Assert.Contains("SETTLED", frames[1]);
         Assert.Contains("127.5 MHz", frames[1]);
         Assert.Contains("* trace", frames[1]);
+        Assert.Contains("Caution:", frames[1]);
+        // The screen the cautions stood on is gone: the summary repeats them.
+        Assert.Contains("Safety:", frames[1]);
     }
 }
