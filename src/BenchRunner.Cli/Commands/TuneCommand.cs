@@ -116,7 +116,7 @@ public static class TuneCommand
             var report = asJson ? console.Error : console.Out;
             var title = $"{validated.Plan.Name} on {validated.Bench!.Name}{(context.DutSerial is null ? "" : $" ({context.DutSerial})")}";
             ITuningObserver view = live
-                ? new TuningLiveView(console.Out, title, options.Settle, console.UseColour, parsed.GetValue(bell))
+                ? new TuningLiveView(console.Out, title, options.Settle, console.UseColour, parsed.GetValue(bell), PlotWidth(), PlotHeight(validated.Plan))
                 : new TuningLogView(report, options.Settle, parsed.GetValue(bell));
             if (!live)
             {
@@ -150,6 +150,33 @@ public static class TuneCommand
             };
         });
         return command;
+    }
+
+    /// <summary>The plot as wide as the terminal allows (64 columns when its size is unknown).</summary>
+    private static int PlotWidth() => TerminalSize(() => Console.WindowWidth) is { } columns ? Math.Clamp(columns - 12, 40, 120) : 64;
+
+    /// <summary>The plot as tall as fits with the figures in the terminal, so that redrawing never scrolls (12 rows when unknown).</summary>
+    private static int PlotHeight(TestPlan plan)
+    {
+        var targets = TuningTargets.From(plan);
+        int figureRows = TuningTargets.StandardKeys.Count + 1
+            + targets.Limits.Count(l => !(l.Trace == targets.Trace && TuningTargets.StandardKeys.Contains(l.Limit.Key)));
+        return TerminalSize(() => Console.WindowHeight) is { } rows
+            ? Math.Clamp(rows - TuningLiveView.LinesBesidesPlot - Math.Max(0, figureRows - 5), 4, 16)
+            : 12;
+    }
+
+    private static int? TerminalSize(Func<int> read)
+    {
+        try
+        {
+            int size = read();
+            return size > 0 ? size : null;
+        }
+        catch (Exception ex) when (ex is IOException or InvalidOperationException or PlatformNotSupportedException)
+        {
+            return null;
+        }
     }
 
     private static TimeSpan Seconds(double seconds, string option, bool allowZero = true)

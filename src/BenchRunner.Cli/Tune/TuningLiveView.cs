@@ -24,6 +24,8 @@ public sealed class TuningLiveView : ITuningObserver
     private readonly SettleOptions _rule;
     private readonly bool _colour;
     private readonly bool _bell;
+    private readonly int _plotWidth;
+    private readonly int _plotHeight;
     private bool _started;
 
     /// <summary>Creates the view.</summary>
@@ -32,8 +34,14 @@ public sealed class TuningLiveView : ITuningObserver
     /// <param name="rule">The settle rule, to say what is still needed.</param>
     /// <param name="colour">Whether to colour in and out.</param>
     /// <param name="bell">Whether to ring the terminal bell when the session settles.</param>
-    public TuningLiveView(TextWriter writer, string title, SettleOptions rule, bool colour, bool bell)
+    /// <param name="plotWidth">The plot's width in columns, at least 10; 64 by default.</param>
+    /// <param name="plotHeight">The plot's height in rows, at least 4; 12 by default.</param>
+    public TuningLiveView(TextWriter writer, string title, SettleOptions rule, bool colour, bool bell, int plotWidth = 64, int plotHeight = 12)
     {
+        ArgumentOutOfRangeException.ThrowIfLessThan(plotWidth, 10);
+        ArgumentOutOfRangeException.ThrowIfLessThan(plotHeight, 4);
+        _plotWidth = plotWidth;
+        _plotHeight = plotHeight;
         _writer = writer ?? throw new ArgumentNullException(nameof(writer));
         _title = title;
         _rule = rule ?? throw new ArgumentNullException(nameof(rule));
@@ -63,6 +71,9 @@ public sealed class TuningLiveView : ITuningObserver
         _writer.Flush();
     }
 
+    /// <summary>How many lines a frame takes besides the plot's rows (with one line of failed checks).</summary>
+    public const int LinesBesidesPlot = 17;
+
     /// <summary>The lines of one frame, without the cursor control.</summary>
     public IReadOnlyList<string> Frame(TuningPass pass)
     {
@@ -82,7 +93,7 @@ public sealed class TuningLiveView : ITuningObserver
         lines.Add("");
         if (pass.Trace is { } trace)
         {
-            lines.AddRange(TracePlot.Render(trace, pass.Mask, colour: _colour));
+            lines.AddRange(TracePlot.Render(trace, pass.Mask, _plotWidth, _plotHeight, _colour));
             lines.Add($"          {TracePlot.TraceMark} trace   {TracePlot.UpperMark} upper limit   {TracePlot.LowerMark} lower limit   {TracePlot.FailMark} outside the mask");
         }
         else
