@@ -31,8 +31,8 @@ public sealed partial class TuneCommandTests
         var settled = Regex.Match(run.Out, @"settled at sweep (\d+):");
         Assert.True(settled.Success, run.Out);
         Assert.Equal(lines.Count, int.Parse(settled.Groups[1].Value));
-        // The detuned board starts outside its targets.
-        Assert.Matches(@"^sweep 1 \+[0-9.]+s out ", run.Out.Split('\n').First(l => l.StartsWith("sweep 1 ", StringComparison.Ordinal)));
+        // Where the first sweep falls on the virtual hand's path depends on how long connecting took
+        // on the real clock; the sweep-by-sweep course is checked on a fake clock in TuningSessionTests.
 
         using (var store = ResultStore.Open(db))
         {
