@@ -98,6 +98,7 @@ public static class CliApplication
         root.Subcommands.Add(ReplayCommand.Create(console));
         root.Subcommands.Add(RunCommand.Create(console, transports));
         root.Subcommands.Add(OverloadCommand.Create(console, transports));
+        root.Subcommands.Add(TuneCommand.Create(console, transports));
         root.Subcommands.Add(ResultsCommand.Create(console));
         root.Subcommands.Add(ExportCommand.Create(console));
         root.Subcommands.Add(SimCommand.Create(console));

@@ -14,4 +14,6 @@ public sealed record CliConsole(TextWriter Out, TextWriter Error, bool UseColour
 
     /// <summary>True when <see cref="In"/> is a terminal, which shows what is typed; otherwise answers to prompts are echoed.</summary>
     public bool InIsTerminal { get; init; }
+    /// <summary>Whether <see cref="Out"/> is an interactive terminal (live views may redraw it); false by default.</summary>
+    public bool IsTerminal { get; init; }
 }

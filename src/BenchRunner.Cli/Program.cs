@@ -10,6 +10,7 @@ public static class Program
         {
             In = Console.In,
             InIsTerminal = !Console.IsInputRedirected,
+            IsTerminal = !Console.IsOutputRedirected,
         };
         return CliApplication.Run(args, console);
     }

@@ -48,11 +48,13 @@ public static class ResultsTextView
             writer.WriteLine($"  instrument {i.Role}: {i.Kind}, {i.Maker} {i.Model} serial {i.Serial} firmware {i.Firmware}{(i.Connection is null ? "" : $" on {i.Connection}")}");
         }
 
-        if (checks.Count > 0)
+        bool tuning = r.Mode == RunMode.Tuning;
+        var listed = tuning ? TuningTrajectoryView.LastSweepChecks(sweeps, checks) : checks;
+        if (listed.Count > 0)
         {
             writer.WriteLine();
-            writer.WriteLine("  Checks");
-            foreach (var c in checks)
+            writer.WriteLine(tuning ? "  Checks of the last sweep" : "  Checks");
+            foreach (var c in listed)
             {
                 var margin = c.Record.Margin is { } m ? $", margin {Display.Value(m, c.Record.MarginUnit ?? "")}" : "";
                 var flagged = c.Record.Flags.HasFlag(CheckFlags.TraceOverloaded) ? "  [FLAGGED: trace measured while overloaded]" : "";
@@ -66,7 +68,11 @@ public static class ResultsTextView
             }
         }
 
-        if (sweeps.Count > 0)
+        if (tuning)
+        {
+            TuningTrajectoryView.Write(sweeps, figures, checks, writer);
+        }
+        else if (sweeps.Count > 0)
         {
             var bySweep = figures.ToLookup(f => f.SweepId);
             var shown = SweepFigures.Where(key => figures.Any(f => f.Figure.Key == key && f.Figure.Value is not null)).ToList();

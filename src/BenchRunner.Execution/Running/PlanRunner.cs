@@ -51,7 +51,24 @@ public sealed partial class PlanRunner
     }
 
     /// <summary>Runs <paramref name="plan"/> and returns how it ended; instrument failures end it with <see cref="RunStatus.Error"/>.</summary>
-    public async Task<RunOutcome> RunAsync(TestPlan plan, RunContext context, IRunObserver? observer, CancellationToken cancellationToken)
+    public Task<RunOutcome> RunAsync(TestPlan plan, RunContext context, IRunObserver? observer, CancellationToken cancellationToken) =>
+        RunCoreAsync(plan, context, observer, again: null, cancellationToken);
+
+    /// <summary>
+    /// Runs <paramref name="plan"/> as one run of many passes: the steps before its first sweep (or overload check, or
+    /// repeat block) once, then the remaining steps again and again while <paramref name="again"/>,
+    /// called after each pass with the pass number (1, 2, ...), returns true. Every sweep and check
+    /// of every pass is recorded in the one run; the verdict is that of the last pass.
+    /// </summary>
+    public Task<RunOutcome> RunRepeatedlyAsync(TestPlan plan, RunContext context, IRunObserver? observer,
+        Func<int, CancellationToken, ValueTask<bool>> again, CancellationToken cancellationToken)
+    {
+        ArgumentNullException.ThrowIfNull(again);
+        return RunCoreAsync(plan, context, observer, again, cancellationToken);
+    }
+
+    private async Task<RunOutcome> RunCoreAsync(TestPlan plan, RunContext context, IRunObserver? observer,
+        Func<int, CancellationToken, ValueTask<bool>>? again, CancellationToken cancellationToken)
     {
         ArgumentNullException.ThrowIfNull(plan);
         ArgumentNullException.ThrowIfNull(context);
@@ -75,8 +92,19 @@ public sealed partial class PlanRunner
                 await ConnectAsync(role.Role, state, cancellationToken).ConfigureAwait(false);
             }
 
-            await RunStepsAsync(plan.Steps, state, cancellationToken).ConfigureAwait(false);
-            var status = state.Checks.All(c => c.Passed) ? RunStatus.Passed : RunStatus.Failed;
+            int once = again is null ? 0 : OnceStepCount(plan.Steps);
+            await RunStepsAsync([.. plan.Steps.Take(once)], state, cancellationToken).ConfigureAwait(false);
+            IReadOnlyList<PlanStep> body = [.. plan.Steps.Skip(once)];
+            int pass = 0, passStart;
+            do
+            {
+                passStart = state.Checks.Count;
+                pass++;
+                await RunStepsAsync(body, state, cancellationToken).ConfigureAwait(false);
+            }
+            while (again is not null && await again(pass, cancellationToken).ConfigureAwait(false));
+
+            var status = state.Checks.Skip(passStart).All(c => c.Passed) ? RunStatus.Passed : RunStatus.Failed;
             return Finish(state, status, null);
         }
         catch (OperationCanceledException) when (cancellationToken.IsCancellationRequested)
@@ -94,6 +122,12 @@ public sealed partial class PlanRunner
                 await instrument.DisposeAsync().ConfigureAwait(false);
             }
         }
+    }
+
+    private static int OnceStepCount(IReadOnlyList<PlanStep> steps)
+    {
+        int first = steps.ToList().FindIndex(s => s is SweepStep or RepeatStep or OverloadCheckStep);
+        return first < 0 ? 0 : first;
     }
 
     private RunOutcome Finish(RunState state, RunStatus status, string? error)
