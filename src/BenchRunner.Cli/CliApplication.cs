@@ -90,22 +90,23 @@ public static class CliApplication
     {
         var root = new RootCommand(
             "BenchRunner drives low-cost RF instruments, runs test plans against limit masks and logs every sweep.");
+        // In the order a bench engineer meets them: measuring, reviewing, checking, running unattended, instruments.
         root.Subcommands.Add(DemoCommand.Create(console));
-        root.Subcommands.Add(CheckCommand.Create(console));
-        root.Subcommands.Add(ValidateCommand.Create(console));
-        root.Subcommands.Add(PortsCommand.Create(console));
-        root.Subcommands.Add(IdentifyCommand.Create(console, transports));
-        root.Subcommands.Add(ReplayCommand.Create(console));
         root.Subcommands.Add(RunCommand.Create(console, transports));
-        root.Subcommands.Add(OverloadCommand.Create(console, transports));
         root.Subcommands.Add(TuneCommand.Create(console, transports));
-        root.Subcommands.Add(ResultsCommand.Create(console));
-        root.Subcommands.Add(ExportCommand.Create(console));
-        root.Subcommands.Add(SimCommand.Create(console));
         root.Subcommands.Add(BatchCommand.Create(console, transports));
         root.Subcommands.Add(ReportCommand.Create(console));
+        root.Subcommands.Add(ResultsCommand.Create(console));
+        root.Subcommands.Add(ExportCommand.Create(console));
+        root.Subcommands.Add(OverloadCommand.Create(console, transports));
+        root.Subcommands.Add(ValidateCommand.Create(console));
+        root.Subcommands.Add(CheckCommand.Create(console));
         root.Subcommands.Add(ServeCommand.Create(console, transports));
         root.Subcommands.Add(StatusCommand.Create(console));
+        root.Subcommands.Add(IdentifyCommand.Create(console, transports));
+        root.Subcommands.Add(PortsCommand.Create(console));
+        root.Subcommands.Add(ReplayCommand.Create(console));
+        root.Subcommands.Add(SimCommand.Create(console));
         return root;
     }
 }
