@@ -47,7 +47,7 @@ public sealed partial class BenchDaemon
                         var faulty = await _health.CheckNowAsync(instruments, stopping).ConfigureAwait(false);
                         if (faulty.Count > 0 && attempt < _settings.RunAttempts)
                         {
-                            DaemonLog.WillRetry(_log, job.Id, job.Plan.Name, string.Join(", ", faulty), attempt + 1, _settings.RunAttempts);
+                            DaemonLog.WillRetry(_log, job.Id, job.Plan.Name, faulty, attempt + 1, _settings.RunAttempts);
                             Status.UpdateJob(job.Id, j => j with { StartedUtc = null, RunId = null, Step = null, Attempt = attempt + 1 });
                             continue;
                         }
