@@ -116,9 +116,9 @@ public sealed partial class ResultStore
             }));
 
     /// <summary>
-    /// Each board's verdict, the status of its latest single or batch run (the
-    /// <c>latest_verdicts</c> view), by serial; only boards whose latest run is in
-    /// <paramref name="lot"/> when one is given.
+    /// Each board's verdict, the status of its latest single or batch run that ended passed or
+    /// failed (the <c>latest_verdicts</c> view), by serial; a board with no such run has no entry.
+    /// Only boards whose latest verdict run is in <paramref name="lot"/> when one is given.
     /// </summary>
     public IReadOnlyList<SerialVerdict> LatestVerdictPerSerial(string? lot = null) =>
         Read("SELECT * FROM latest_verdicts WHERE $lot IS NULL OR lot = $lot ORDER BY dut_serial",

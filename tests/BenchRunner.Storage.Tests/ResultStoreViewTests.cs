@@ -19,23 +19,58 @@ public sealed class ResultStoreViewTests : IDisposable
     }
 
     [Fact]
-    public void LatestVerdictPerSerial_RetestedBoards_CountOnlyTheirLatestRun()
+    public void LatestVerdictPerSerial_RetestedBoards_CountOnlyTheirLatestVerdictRun()
     {
         var runs = BuildLot();
 
         var verdicts = _store.LatestVerdictPerSerial("L24-03");
 
+        // 0006 passed and was then stopped: still passed, both runs counted. 0007 was only ever
+        // stopped: it has no verdict and no row.
         Assert.Equal(
             [
                 ("PSF-24-0001", RunStatus.Passed, runs["0001 retest"], 2),
                 ("PSF-24-0002", RunStatus.Passed, runs["0002"], 1),
                 ("PSF-24-0003", RunStatus.Failed, runs["0003"], 1),
                 ("PSF-24-0004", RunStatus.Failed, runs["0004 retest"], 2),
-                ("PSF-24-0005", RunStatus.Error, runs["0005 second"], 2),
+                ("PSF-24-0005", RunStatus.Failed, runs["0005 second"], 2),
+                ("PSF-24-0006", RunStatus.Passed, runs["0006"], 2),
             ],
             verdicts.Select(v => (v.DutSerial, v.Verdict, v.RunId, v.Runs)));
         Assert.All(verdicts, v => Assert.Equal("L24-03", v.Lot));
-        Assert.Equal(6, _store.LatestVerdictPerSerial().Count);
+        Assert.Equal(7, _store.LatestVerdictPerSerial().Count);
+    }
+
+    [Theory]
+    [InlineData(RunStatus.Stopped)]
+    [InlineData(RunStatus.Error)]
+    [InlineData(RunStatus.Interrupted)]
+    [InlineData(RunStatus.Running)]
+    public void LatestVerdictPerSerial_PassedThenNoVerdict_StaysPassed(RunStatus later)
+    {
+        var passed = _store.StartRun(Samples.Run("PSF-24-0001", "L24-03", RunMode.Batch));
+        _store.FinishRun(passed, RunStatus.Passed);
+        _clock.Advance(TimeSpan.FromMinutes(3));
+        var next = _store.StartRun(Samples.Run("PSF-24-0001", "L24-03", RunMode.Batch, retest: true));
+        if (later != RunStatus.Running)
+        {
+            _store.FinishRun(next, later);
+        }
+
+        var verdict = Assert.Single(_store.LatestVerdictPerSerial());
+
+        Assert.Equal((RunStatus.Passed, passed, 2), (verdict.Verdict, verdict.RunId, verdict.Runs));
+    }
+
+    [Fact]
+    public void LatestVerdictPerSerial_OnlyStopped_HasNoRow()
+    {
+        var id = _store.StartRun(Samples.Run("PSF-24-0001", "L24-03", RunMode.Batch));
+        _store.FinishRun(id, RunStatus.Stopped);
+
+        Assert.Empty(_store.LatestVerdictPerSerial());
+        Assert.Equal(new object?[] { "L24-03", 1L, 0L, 0L, 1L, null, 1L },
+            StoreFile.Query(_store.Path, "SELECT lot, boards, passed, failed, other, yield_percent, runs FROM lot_summary").Single());
     }
 
     [Fact]
@@ -46,7 +81,9 @@ public sealed class ResultStoreViewTests : IDisposable
         var rows = StoreFile.Query(_store.Path, "SELECT lot, boards, passed, failed, other, yield_percent, runs FROM lot_summary ORDER BY lot");
 
         Assert.Equal(2, rows.Count);
-        Assert.Equal(new object?[] { "L24-03", 5L, 2L, 2L, 1L, 40.0, 8L }, rows[0]);
+        // Boards 0001-0006 have verdicts (3 passed, 3 failed); 0007 has none and counts in other.
+        // The yield is over the boards with a verdict; runs counts every single and batch run.
+        Assert.Equal(new object?[] { "L24-03", 7L, 3L, 3L, 1L, 50.0, 11L }, rows[0]);
         Assert.Equal(new object?[] { "L24-04", 1L, 1L, 0L, 0L, 100.0, 1L }, rows[1]);
     }
 
@@ -98,7 +135,8 @@ public sealed class ResultStoreViewTests : IDisposable
     /// <summary>
     /// Lot L24-03: 0001 fails then passes on retest; 0002 passes; 0003 fails, then has a tuning
     /// session (not a verdict); 0004 passes, then fails on retest; 0005 has two runs started in the
-    /// same millisecond, the later id (error) counting. Lot L24-04: 0101 passes.
+    /// same millisecond, the later id (failed) counting; 0006 passes, then is stopped on retest (no
+    /// verdict); 0007 is only ever stopped. Lot L24-04: 0101 passes.
     /// </summary>
     private Dictionary<string, long> BuildLot()
     {
@@ -123,7 +161,10 @@ public sealed class ResultStoreViewTests : IDisposable
         Run("0003 tuning", "0003", RunStatus.Stopped, mode: RunMode.Tuning);
         Run("0004 retest", "0004", RunStatus.Failed);
         Run("0005 first", "0005", RunStatus.Passed, advance: false);
-        Run("0005 second", "0005", RunStatus.Error);
+        Run("0005 second", "0005", RunStatus.Failed);
+        Run("0006", "0006", RunStatus.Passed);
+        Run("0006 retest", "0006", RunStatus.Stopped);
+        Run("0007", "0007", RunStatus.Stopped);
         return runs;
     }
 }

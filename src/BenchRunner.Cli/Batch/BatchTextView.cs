@@ -1,5 +1,6 @@
 using System.Globalization;
 using BenchRunner.Cli.Output;
+using BenchRunner.Core.Text;
 using BenchRunner.Execution.Batch;
 using BenchRunner.Reports.Formatting;
 using BenchRunner.Reports.Lots;
@@ -23,7 +24,7 @@ public sealed class BatchTextView(TextWriter writer, bool colour)
         }
 
         var verdict = board.Passed ? Display.Colour("PASS", ConsoleColour.Green, colour) : Display.Colour("FAIL", ConsoleColour.Red, colour);
-        writer.WriteLine($"{board.Serial,-14} {verdict}{retest}  {outcome.Checks.Count(c => c.Passed)} of {outcome.Checks.Count} checks passed, run {outcome.RunId}");
+        writer.WriteLine($"{board.Serial,-14} {verdict}{retest}  {outcome.Checks.Count(c => c.Passed)} of {Counted.Of(outcome.Checks.Count, "check")} passed, run {outcome.RunId}");
         foreach (var check in outcome.Checks.Where(c => !c.Passed))
         {
             writer.WriteLine($"    failed: {check.Name}: {check.Detail}");

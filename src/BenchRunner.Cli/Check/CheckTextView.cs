@@ -1,5 +1,6 @@
 using BenchRunner.Cli.Output;
 using BenchRunner.Core.Masks;
+using BenchRunner.Core.Text;
 
 namespace BenchRunner.Cli.Check;
 
@@ -11,8 +12,8 @@ public static class CheckTextView
     {
         var trace = outcome.Trace;
         var eval = outcome.Evaluation;
-        writer.WriteLine($"Trace  {outcome.TracePath}: {trace.Quantity}, {trace.Count} points, {Display.Frequency(trace.Axis.Start)} to {Display.Frequency(trace.Axis.Stop)}");
-        writer.WriteLine($"Mask   {outcome.MaskPath}: \"{outcome.Mask.Name}\", {eval.PointsChecked} of {trace.Count} points under a limit");
+        writer.WriteLine($"Trace  {outcome.TracePath}: {trace.Quantity}, {Counted.Of(trace.Count, "point")}, {Display.Frequency(trace.Axis.Start)} to {Display.Frequency(trace.Axis.Stop)}");
+        writer.WriteLine($"Mask   {outcome.MaskPath}: \"{outcome.Mask.Name}\", {eval.PointsChecked} of {Counted.Of(trace.Count, "point")} under a limit");
         writer.WriteLine();
 
         var verdict = eval.Passed

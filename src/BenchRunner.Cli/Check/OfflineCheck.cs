@@ -1,6 +1,7 @@
 using BenchRunner.Core.Diagnostics;
 using BenchRunner.Core.Figures;
 using BenchRunner.Core.Masks;
+using BenchRunner.Core.Text;
 using BenchRunner.Core.TraceFiles;
 using BenchRunner.Core.Traces;
 
@@ -36,7 +37,7 @@ public static class OfflineCheck
         if (evaluation.PointsChecked == 0)
         {
             throw new UsageException(
-                $"mask \"{mask.Name}\" ({maskPath}) covers none of the {trace.Count} points of {tracePath} " +
+                $"mask \"{mask.Name}\" ({maskPath}) covers none of the {Counted.Of(trace.Count, "point")} of {tracePath} " +
                 $"({trace.Axis.Start} to {trace.Axis.Stop}); check the mask's corner frequencies or the sweep.");
         }
 

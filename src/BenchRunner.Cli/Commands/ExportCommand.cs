@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.Globalization;
 using BenchRunner.Cli.Export;
 using BenchRunner.Cli.Results;
+using BenchRunner.Core.Text;
 using BenchRunner.Core.TraceFiles;
 using BenchRunner.Storage;
 
@@ -63,7 +64,7 @@ public static class ExportCommand
                 Write(target, file, id);
                 var sequences = string.Join(", ", file.Sequences.Select(s => s.ToString(CultureInfo.InvariantCulture)));
                 var quantities = string.Join(", ", file.Set.Traces.Select(t => t.Quantity));
-                console.Out.WriteLine($"wrote {target}  ({quantities}; sweep{(file.Sequences.Count == 1 ? "" : "s")} {sequences}; {file.Set.Axis.Count} points)");
+                console.Out.WriteLine($"wrote {target}  ({quantities}; sweep{(file.Sequences.Count == 1 ? "" : "s")} {sequences}; {Counted.Of(file.Set.Axis.Count, "point")})");
                 if (file.Note is not null)
                 {
                     console.Out.WriteLine($"  note: {file.Note}");

@@ -4,6 +4,7 @@ using System.Text.Json;
 using BenchRunner.Cli.Output;
 using BenchRunner.Cli.Results;
 using BenchRunner.Cli.Run;
+using BenchRunner.Core.Text;
 using BenchRunner.Execution.Running;
 using BenchRunner.Execution.Validation;
 using BenchRunner.Instruments.Connections;
@@ -108,7 +109,7 @@ public static class RunCommand
             writer.WriteLine(Display.Colour($"  {flagged} check(s) judged a trace measured while the analyser was overloaded; do not trust their verdicts until it is measured again with more attenuation.", ConsoleColour.Yellow, colour));
         }
 
-        writer.WriteLine($"{outcome.Checks.Count(c => c.Passed)} of {outcome.Checks.Count} checks passed; run {outcome.RunId} stored in {db} (benchrunner results --db {db} --run {outcome.RunId}).");
+        writer.WriteLine($"{outcome.Checks.Count(c => c.Passed)} of {Counted.Of(outcome.Checks.Count, "check")} passed; run {outcome.RunId} stored in {db} (benchrunner results --db {db} --run {outcome.RunId}).");
     }
 
     private static void WriteJson(RunOutcome outcome, string db, TextWriter writer)

@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.Text.Json;
 using System.Text.Json.Nodes;
 using BenchRunner.Core.Diagnostics;
+using BenchRunner.Core.Text;
 using BenchRunner.Execution.Plans;
 using BenchRunner.Execution.Validation;
 
@@ -91,6 +92,6 @@ public static class ValidateCommand
         console.Out.WriteLine($"Plan \"{p.Name}\" is valid{(validated.Bench is { } b ? $" on bench \"{b.Name}\"" : "")}.");
         console.Out.WriteLine($"  roles   {roles}");
         console.Out.WriteLine($"  steps   {steps.Count}");
-        console.Out.WriteLine($"  checks  {checks} ({steps.Count(s => s is MaskCheck)} mask, {checks - overload - steps.Count(s => s is MaskCheck)} figure limits{(overload > 0 ? $", {overload} overload" : "")})");
+        console.Out.WriteLine($"  checks  {checks} ({steps.Count(s => s is MaskCheck)} mask, {Counted.Of(checks - overload - steps.Count(s => s is MaskCheck), "figure limit")}{(overload > 0 ? $", {overload} overload" : "")})");
     }
 }

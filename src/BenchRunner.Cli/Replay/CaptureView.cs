@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text.Json.Nodes;
+using BenchRunner.Core.Text;
 using BenchRunner.Instruments.Capture;
 
 namespace BenchRunner.Cli.Replay;
@@ -20,9 +21,9 @@ public static class CaptureView
         if (header.Instrument is not null) writer.WriteLine($"Instrument  {header.Instrument}");
         if (header.Note is not null) writer.WriteLine($"Note        {header.Note}");
         writer.WriteLine($"Length      {session.Duration.TotalSeconds.ToString("0.000", CultureInfo.InvariantCulture)} s: " +
-                         $"{Count(messages, CaptureDirection.HostToDevice)} messages sent ({session.ByteCount(CaptureDirection.HostToDevice)} bytes), " +
-                         $"{Count(messages, CaptureDirection.DeviceToHost)} received ({session.ByteCount(CaptureDirection.DeviceToHost)} bytes), " +
-                         $"{session.Events.Count} events");
+                         $"{Counted.Of(Count(messages, CaptureDirection.HostToDevice), "message")} sent ({Counted.Of(session.ByteCount(CaptureDirection.HostToDevice), "byte")}), " +
+                         $"{Count(messages, CaptureDirection.DeviceToHost)} received ({Counted.Of(session.ByteCount(CaptureDirection.DeviceToHost), "byte")}), " +
+                         $"{Counted.Of(session.Events.Count, "event")}");
         writer.WriteLine();
         writer.WriteLine("        time  line  who     what");
         foreach (var entry in Timeline(session, messages))
@@ -79,7 +80,7 @@ public static class CaptureView
     }
 
     private static string Shorten(string text, int bytes) =>
-        text.Length <= MessageWidth ? text : $"{text[..MessageWidth]}... ({bytes} bytes)";
+        text.Length <= MessageWidth ? text : $"{text[..MessageWidth]}... ({Counted.Of(bytes, "byte")})";
 
     private sealed record Entry(TimeSpan Offset, int Line, string Who, int Bytes, string What, string FullText);
 }

@@ -1,5 +1,6 @@
 using System.Globalization;
 using BenchRunner.Cli.Output;
+using BenchRunner.Core.Text;
 using BenchRunner.Storage;
 
 namespace BenchRunner.Cli.Results;
@@ -29,7 +30,7 @@ public static class TuningTrajectoryView
         var checksBySweep = checks.Where(c => c.Record.SweepId is not null).ToLookup(c => c.Record.SweepId!.Value);
         var first = sweeps[0].Record.AcquiredUtc ?? DateTimeOffset.MinValue;
         writer.WriteLine();
-        writer.WriteLine($"  Trajectory ({sweeps.Count} sweeps of the tuning session)");
+        writer.WriteLine($"  Trajectory ({Counted.Of(sweeps.Count, "sweep")} of the tuning session)");
         writer.WriteLine($"    {"#",4}  {"time",8}  {"centre",-13}  {"change",-12}  {"loss",-8}  {"-3 dB width",-11}  {"mask margin",-11}  {"checks",-8}  streak");
         double? previousCentre = null;
         int streak = 0;

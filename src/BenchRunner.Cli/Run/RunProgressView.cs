@@ -1,4 +1,5 @@
 using BenchRunner.Cli.Output;
+using BenchRunner.Core.Text;
 using BenchRunner.Execution.Running;
 
 namespace BenchRunner.Cli.Run;
@@ -15,7 +16,7 @@ public sealed class RunProgressView(TextWriter writer, bool colour) : IRunObserv
                 writer.WriteLine($"  - {step.Step}");
                 break;
             case SweepAcquired sweep:
-                writer.WriteLine($"    {sweep.Role}: {sweep.TraceName} ({sweep.Trace.Quantity}, {sweep.Trace.Count} points) acquired and stored");
+                writer.WriteLine($"    {sweep.Role}: {sweep.TraceName} ({sweep.Trace.Quantity}, {Counted.Of(sweep.Trace.Count, "point")}) acquired and stored");
                 break;
             case CheckCompleted check:
                 var verdict = check.Result.Passed

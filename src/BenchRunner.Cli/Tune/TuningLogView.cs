@@ -1,4 +1,5 @@
 using System.Globalization;
+using BenchRunner.Core.Text;
 using BenchRunner.Execution.Tuning;
 
 namespace BenchRunner.Cli.Tune;
@@ -17,7 +18,7 @@ public sealed class TuningLogView(TextWriter writer, SettleOptions rule, bool be
         writer.WriteLine(Line(pass));
         if (pass.Settle.JustSettled)
         {
-            writer.WriteLine($"settled at sweep {pass.Sweep}: every target held for {pass.Settle.Streak} sweeps ({pass.Settle.Held.TotalSeconds.ToString("0.0", CultureInfo.InvariantCulture)} s; the rule asks {rule.Sweeps} sweeps and {rule.MinimumTime.TotalSeconds.ToString("0.0", CultureInfo.InvariantCulture)} s){(bell ? "\a" : "")}");
+            writer.WriteLine($"settled at sweep {pass.Sweep}: every target held for {Counted.Of(pass.Settle.Streak, "sweep")} ({pass.Settle.Held.TotalSeconds.ToString("0.0", CultureInfo.InvariantCulture)} s; the rule asks {Counted.Of(rule.Sweeps, "sweep")} and {rule.MinimumTime.TotalSeconds.ToString("0.0", CultureInfo.InvariantCulture)} s){(bell ? "\a" : "")}");
         }
         else if (pass.Settle.JustLeft)
         {

@@ -1,5 +1,6 @@
 using System.Globalization;
 using BenchRunner.Cli.Output;
+using BenchRunner.Core.Text;
 using BenchRunner.Execution.Plans;
 using BenchRunner.Execution.Tuning;
 
@@ -64,10 +65,10 @@ public static class TuningText
     public static string Settle(SettleProgress progress, SettleOptions rule)
     {
         string Seconds(TimeSpan t) => $"{t.TotalSeconds.ToString("0.0", CultureInfo.InvariantCulture)} s";
-        string needs = $"{rule.Sweeps} sweep{(rule.Sweeps == 1 ? "" : "s")} and {Seconds(rule.MinimumTime)}";
+        string needs = $"{Counted.Of(rule.Sweeps, "sweep")} and {Seconds(rule.MinimumTime)}";
         if (progress.Settled)
         {
-            return $"SETTLED: every target held for {progress.Streak} sweeps ({Seconds(progress.Held)}); the rule is {needs}";
+            return $"SETTLED: every target held for {Counted.Of(progress.Streak, "sweep")} ({Seconds(progress.Held)}); the rule is {needs}";
         }
 
         if (!progress.Inside)
@@ -75,7 +76,7 @@ public static class TuningText
             return progress.JustLeft ? "left the target after settling; waiting for it to hold again" : $"not inside yet; settles after {needs} inside";
         }
 
-        return $"inside for {progress.Streak} sweep{(progress.Streak == 1 ? "" : "s")} ({Seconds(progress.Held)}); settles after {needs}";
+        return $"inside for {Counted.Of(progress.Streak, "sweep")} ({Seconds(progress.Held)}); settles after {needs}";
     }
 
     /// <summary>A duration as minutes and seconds, e.g. <c>01:07.5</c>.</summary>

@@ -47,7 +47,7 @@ public sealed partial class BenchDaemon
                         var faulty = await _health.CheckNowAsync(instruments, stopping).ConfigureAwait(false);
                         if (faulty.Count > 0 && attempt < _settings.RunAttempts)
                         {
-                            DaemonLog.WillRetry(_log, job.Id, job.Plan.Name, string.Join(", ", faulty), attempt + 1, _settings.RunAttempts);
+                            DaemonLog.WillRetry(_log, job.Id, job.Plan.Name, faulty, attempt + 1, _settings.RunAttempts);
                             Status.UpdateJob(job.Id, j => j with { StartedUtc = null, RunId = null, Step = null, Attempt = attempt + 1 });
                             continue;
                         }
@@ -102,7 +102,12 @@ public sealed partial class BenchDaemon
         try
         {
             var runner = new PlanRunner(_bench, _transports, _store, _time);
-            var context = new RunContext(job.PlanText, _benchText, _softwareVersion, Environment.MachineName) { Operator = "daemon" };
+            var context = new RunContext(job.PlanText, _benchText, _softwareVersion, Environment.MachineName)
+            {
+                Operator = "daemon",
+                // The run records why it was stopped: the time limit or the daemon stopping, not an operator.
+                StopReason = () => gate.Reason is { } reason ? $"stopped: {reason}" : null,
+            };
             var outcome = await runner.RunAsync(job.Plan, context, new FanOutObserver(gate, observer), gate.Token).ConfigureAwait(false);
             return (outcome, gate.Reason);
         }

@@ -1,3 +1,4 @@
+using BenchRunner.Core.Text;
 using Microsoft.Extensions.Logging;
 
 namespace BenchRunner.Daemon.Logging;
@@ -8,17 +9,25 @@ namespace BenchRunner.Daemon.Logging;
 /// </summary>
 internal static partial class DaemonLog
 {
-    [LoggerMessage(1, LogLevel.Information, "Daemon starting: bench {Bench} ({BenchFile}), inbox {Inbox}, results {Database}, {ScheduleCount} schedules")]
-    public static partial void Starting(ILogger log, string bench, string benchFile, string inbox, string database, int scheduleCount);
+    public static void Starting(ILogger log, string bench, string benchFile, string inbox, string database, int scheduleCount) =>
+        LogStarting(log, bench, benchFile, inbox, database, scheduleCount, Counted.Noun(scheduleCount, "schedule"));
 
-    [LoggerMessage(2, LogLevel.Warning, "Runs {RunIds} were still marked running from before; marked interrupted (their committed sweeps are kept)")]
+    [LoggerMessage(1, LogLevel.Information, "Daemon starting: bench {Bench} ({BenchFile}), inbox {Inbox}, results {Database}, {ScheduleCount} {ScheduleWord}", EventName = "Starting")]
+    private static partial void LogStarting(ILogger log, string bench, string benchFile, string inbox, string database, int scheduleCount, string scheduleWord);
+
+    [LoggerMessage(2, LogLevel.Warning, "Still marked running from before, now marked interrupted (their committed sweeps are kept): runs {RunIds}")]
     public static partial void InterruptedRuns(ILogger log, string runIds);
 
-    [LoggerMessage(3, LogLevel.Information, "Daemon stopping: {Running} runs in progress finish their sweep in flight (at most {StopWithinSeconds} s)")]
-    public static partial void Stopping(ILogger log, int running, double stopWithinSeconds);
+    public static void Stopping(ILogger log, int running, double stopWithinSeconds) =>
+        LogStopping(log, running, Counted.Noun(running, "run"), stopWithinSeconds);
 
-    [LoggerMessage(4, LogLevel.Information, "Daemon stopped; {Queued} queued plans stay in the inbox for the next start")]
-    public static partial void Stopped(ILogger log, int queued);
+    [LoggerMessage(3, LogLevel.Information, "Daemon stopping: {Running} {RunWord} in progress, each finishing its sweep in flight (at most {StopWithinSeconds} s)", EventName = "Stopping")]
+    private static partial void LogStopping(ILogger log, int running, string runWord, double stopWithinSeconds);
+
+    public static void Stopped(ILogger log, int queued) => LogStopped(log, queued, Counted.Noun(queued, "plan"));
+
+    [LoggerMessage(4, LogLevel.Information, "Daemon stopped; {Queued} queued {PlanWord} left in the inbox for the next start", EventName = "Stopped")]
+    private static partial void LogStopped(ILogger log, int queued, string planWord);
 
     [LoggerMessage(5, LogLevel.Information, "Safety: {Caution}")]
     public static partial void SafetyCaution(ILogger log, string caution);
@@ -26,20 +35,29 @@ internal static partial class DaemonLog
     [LoggerMessage(10, LogLevel.Information, "Job {JobId} queued: plan {Plan} from {Origin}, instruments {Instruments}")]
     public static partial void Queued(ILogger log, string jobId, string plan, string origin, string instruments);
 
-    [LoggerMessage(11, LogLevel.Warning, "Plan file {PlanFile} rejected ({ProblemCount} problems, first: {FirstProblem}); moved to {Target}")]
-    public static partial void Rejected(ILogger log, string planFile, int problemCount, string firstProblem, string target);
+    public static void Rejected(ILogger log, string planFile, int problemCount, string firstProblem, string target) =>
+        LogRejected(log, planFile, problemCount, Counted.Noun(problemCount, "problem"), firstProblem, target);
+
+    [LoggerMessage(11, LogLevel.Warning, "Plan file {PlanFile} rejected ({ProblemCount} {ProblemWord}, first: {FirstProblem}); moved to {Target}", EventName = "Rejected")]
+    private static partial void LogRejected(ILogger log, string planFile, int problemCount, string problemWord, string firstProblem, string target);
 
     [LoggerMessage(12, LogLevel.Information, "Run {RunId} started: job {JobId}, plan {Plan}, instruments {Instruments}, attempt {Attempt}")]
     public static partial void RunStarted(ILogger log, long? runId, string jobId, string plan, string instruments, int attempt);
 
-    [LoggerMessage(13, LogLevel.Information, "Run {RunId} on {Instruments}: sweep {Trace} from {Instrument} stored ({Quantity}, {Points} points)")]
-    public static partial void SweepStored(ILogger log, long? runId, string instruments, string trace, string instrument, string quantity, int points);
+    public static void SweepStored(ILogger log, long? runId, string instruments, string trace, string instrument, string quantity, int points) =>
+        LogSweepStored(log, runId, instruments, trace, instrument, quantity, points, Counted.Noun(points, "point"));
+
+    [LoggerMessage(13, LogLevel.Information, "Run {RunId} on {Instruments}: sweep {Trace} from {Instrument} stored ({Quantity}, {Points} {PointWord})", EventName = "SweepStored")]
+    private static partial void LogSweepStored(ILogger log, long? runId, string instruments, string trace, string instrument, string quantity, int points, string pointWord);
 
     [LoggerMessage(14, LogLevel.Information, "Run {RunId} on {Instruments}: check {Check} {Verdict}: {Detail}")]
     public static partial void CheckVerdict(ILogger log, long? runId, string instruments, string check, string verdict, string detail);
 
-    [LoggerMessage(15, LogLevel.Information, "Run {RunId} finished: plan {Plan} on {Instruments} {Status}, {PassedChecks} of {Checks} checks passed{ErrorText}")]
-    public static partial void RunFinished(ILogger log, long? runId, string plan, string instruments, string status, int passedChecks, int checks, string errorText);
+    public static void RunFinished(ILogger log, long? runId, string plan, string instruments, string status, int passedChecks, int checks, string errorText) =>
+        LogRunFinished(log, runId, plan, instruments, status, passedChecks, checks, Counted.Noun(checks, "check"), errorText);
+
+    [LoggerMessage(15, LogLevel.Information, "Run {RunId} finished: plan {Plan} on {Instruments} {Status}, {PassedChecks} of {Checks} {CheckWord} passed{ErrorText}", EventName = "RunFinished")]
+    private static partial void LogRunFinished(ILogger log, long? runId, string plan, string instruments, string status, int passedChecks, int checks, string checkWord, string errorText);
 
     [LoggerMessage(16, LogLevel.Information, "Plan file {PlanFile} done; moved to {Target}")]
     public static partial void Filed(ILogger log, string planFile, string target);
@@ -50,8 +68,11 @@ internal static partial class DaemonLog
     [LoggerMessage(18, LogLevel.Information, "Run {RunId} on {Instruments}: stopping ({Reason}); the sweep in flight is finished first")]
     public static partial void StopRequested(ILogger log, long? runId, string instruments, string reason);
 
-    [LoggerMessage(19, LogLevel.Warning, "Job {JobId} ({Plan}) will run again once {Instruments} answer (attempt {Attempt} of {Attempts})")]
-    public static partial void WillRetry(ILogger log, string jobId, string plan, string instruments, int attempt, int attempts);
+    public static void WillRetry(ILogger log, string jobId, string plan, IReadOnlyCollection<string> instruments, int attempt, int attempts) =>
+        LogWillRetry(log, jobId, plan, string.Join(", ", instruments), instruments.Count == 1 ? "answers" : "answer", attempt, attempts);
+
+    [LoggerMessage(19, LogLevel.Warning, "Job {JobId} ({Plan}) will run again once {Instruments} {AnswerWord} (attempt {Attempt} of {Attempts})", EventName = "WillRetry")]
+    private static partial void LogWillRetry(ILogger log, string jobId, string plan, string instruments, string answerWord, int attempt, int attempts);
 
     [LoggerMessage(20, LogLevel.Warning, "Instrument {Instrument} faulty: {Fault}; trying again in {WaitSeconds} s (failure {Faults})")]
     public static partial void InstrumentFaulty(ILogger log, string instrument, string fault, int faults, double waitSeconds);

@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text;
+using BenchRunner.Core.Text;
 using BenchRunner.Execution.Running;
 using BenchRunner.Storage;
 
@@ -52,7 +53,7 @@ internal static class RunSummary
 
     /// <summary>One line for the status file's recent list.</summary>
     public static string OneLine(RunOutcome outcome, string? stopReason) =>
-        $"{outcome.Checks.Count(c => c.Passed)} of {outcome.Checks.Count} checks passed"
+        $"{outcome.Checks.Count(c => c.Passed)} of {Counted.Of(outcome.Checks.Count, "check")} passed"
         + (outcome.Status == RunStatus.Stopped && stopReason is not null ? $"; stopped: {stopReason}" : outcome.Error is null ? "" : $"; {outcome.Error}");
 
     /// <summary>The lower-case word of a run status, as stored.</summary>

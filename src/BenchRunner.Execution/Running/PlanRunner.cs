@@ -24,6 +24,9 @@ namespace BenchRunner.Execution.Running;
 /// </summary>
 public sealed partial class PlanRunner
 {
+    /// <summary>What a stopped run records as why, unless its <see cref="RunContext.StopReason"/> says otherwise.</summary>
+    public const string StoppedByOperator = "stopped by the operator";
+
     /// <summary>The caution shown with every refused setting.</summary>
     public const string InputCaution =
         "Never exceed an analyser input's maximum level: add attenuation or lower the level, and use a DC block where DC may be present.";
@@ -109,7 +112,7 @@ public sealed partial class PlanRunner
         }
         catch (OperationCanceledException) when (cancellationToken.IsCancellationRequested)
         {
-            return Finish(state, RunStatus.Stopped, "stopped by the operator");
+            return Finish(state, RunStatus.Stopped, context.StopReason?.Invoke() is { } reason && !string.IsNullOrWhiteSpace(reason) ? reason : StoppedByOperator);
         }
         catch (Exception ex) when (ex is InstrumentException or SafetyRefusedException or IOException)
         {

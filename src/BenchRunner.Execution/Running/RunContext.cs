@@ -23,4 +23,11 @@ public sealed record RunContext(string PlanText, string? BenchText, string Softw
 
     /// <summary>The kind of run recorded; <see cref="RunMode.Single"/> by default.</summary>
     public RunMode Mode { get; init; } = RunMode.Single;
+
+    /// <summary>
+    /// Asked when the run is stopped by cancellation: the text recorded as why, e.g.
+    /// <c>stopped: the time limit of 600 s was reached</c>. Null, or a null or blank answer,
+    /// records <see cref="PlanRunner.StoppedByOperator"/>.
+    /// </summary>
+    public Func<string?>? StopReason { get; init; }
 }

@@ -106,7 +106,10 @@ public sealed class BenchDaemonInboxTests
         var final = StatusFile.Read(rig.Settings.StatusFile)!;
         Assert.Equal("stopped", final.State);
         Assert.Empty(final.Running);
-        Assert.Equal("stopped", Assert.Single(final.Recent).Status);
+        var recent = Assert.Single(final.Recent);
+        Assert.Equal("stopped", recent.Status);
+        using var store = ResultStore.Open(rig.Settings.DatabasePath);
+        Assert.Equal("stopped: the daemon is stopping", store.GetRun(recent.RunId!.Value)!.ErrorMessage);
     }
 
     [Fact]

@@ -31,6 +31,8 @@ public sealed class BenchDaemonScheduleTests
         using var store = ResultStore.Open(rig.Settings.DatabasePath);
         var run = store.GetRun(first.RunId!.Value)!;
         Assert.Equal(RunStatus.Stopped, run.Status);
+        // The run records that its time limit stopped it, not an operator.
+        Assert.Equal("stopped: the time limit of 3 s was reached", run.ErrorMessage);
         Assert.NotEmpty(store.GetSweeps(run.Id));
     }
 }

@@ -30,6 +30,7 @@ public sealed class DaemonLifecycleTests
         using var store = ResultStore.Open(home.PathOf("results.db"));
         var run = Assert.Single(store.ListRuns());
         Assert.Equal(RunStatus.Stopped, run.Status);
+        Assert.Equal("stopped: the daemon is stopping", run.ErrorMessage);
         // Every sweep logged as stored is in the file, and nothing was cut off half-way: the count matches the log.
         Assert.Equal(daemon.Count(SweepLogged), store.GetSweeps(run.Id).Count);
         Assert.Empty(store.InterruptedAtOpen);

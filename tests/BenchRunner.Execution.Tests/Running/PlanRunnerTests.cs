@@ -107,7 +107,58 @@ public sealed class PlanRunnerTests
         var outcome = await runner.RunAsync(plan, Context("PSF-24-0001"), null, cts.Token).WaitAsync(Limit);
 
         Assert.Equal(RunStatus.Stopped, outcome.Status);
-        Assert.Equal(RunStatus.Stopped, store.GetRun(outcome.RunId!.Value)!.Status);
+        var run = store.GetRun(outcome.RunId!.Value)!;
+        Assert.Equal(RunStatus.Stopped, run.Status);
+        Assert.Equal("stopped by the operator", run.ErrorMessage);
+        Assert.Equal("stopped by the operator", outcome.Error);
+    }
+
+    [Fact]
+    public async Task Run_CancelledWithAStopReason_RecordsThatReason()
+    {
+        using var dir = new TempDirectory();
+        using var store = ResultStore.Open(dir.PathOf("runs.db"));
+        var (runner, _) = Create(store);
+        var plan = PlanFile.Load(RepositoryFiles.Example("plans/psf-137-check.yaml"));
+        using var cts = new CancellationTokenSource();
+        await cts.CancelAsync();
+        var asked = 0;
+        var context = Context("PSF-24-0001") with { StopReason = () => { asked++; return "stopped: the time limit of 600 s was reached"; } };
+
+        var outcome = await runner.RunAsync(plan, context, null, cts.Token).WaitAsync(Limit);
+
+        Assert.Equal(RunStatus.Stopped, outcome.Status);
+        Assert.Equal("stopped: the time limit of 600 s was reached", store.GetRun(outcome.RunId!.Value)!.ErrorMessage);
+        Assert.Equal("stopped: the time limit of 600 s was reached", outcome.Error);
+        Assert.Equal(1, asked);
+    }
+
+    [Fact]
+    public async Task Run_CompletedWithAStopReason_NeverAsksForIt()
+    {
+        var (runner, _) = Create(store: null);
+        var plan = PlanFile.Load(RepositoryFiles.Example("plans/psf-137-check.yaml"));
+        var context = Context("PSF-24-0001") with { StopReason = () => throw new InvalidOperationException("asked without a stop") };
+
+        var outcome = await runner.RunAsync(plan, context, null, CancellationToken.None).WaitAsync(Limit);
+
+        Assert.NotEqual(RunStatus.Stopped, outcome.Status);
+        Assert.Null(outcome.Error);
+    }
+
+    [Theory]
+    [InlineData(null)]
+    [InlineData("  ")]
+    public async Task Run_CancelledWithABlankStopReason_RecordsTheOperator(string? reason)
+    {
+        var (runner, _) = Create(store: null);
+        var plan = PlanFile.Load(RepositoryFiles.Example("plans/psf-137-check.yaml"));
+        using var cts = new CancellationTokenSource();
+        await cts.CancelAsync();
+
+        var outcome = await runner.RunAsync(plan, Context("PSF-24-0001") with { StopReason = () => reason }, null, cts.Token).WaitAsync(Limit);
+
+        Assert.Equal(PlanRunner.StoppedByOperator, outcome.Error);
     }
 
     [Theory]

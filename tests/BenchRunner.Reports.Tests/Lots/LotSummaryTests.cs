@@ -47,6 +47,44 @@ public sealed class LotSummaryTests
     }
 
     [Fact]
+    public void Read_SameFileAsTheLotSummaryView_AgreesOnEveryCount()
+    {
+        using var lot = new LotStore();
+        lot.AddRun("PSF-24-0001", RunStatus.Passed);
+        lot.AddRun("PSF-24-0001", RunStatus.Stopped, retest: true);
+        lot.AddRun("PSF-24-0002", RunStatus.Failed, [Mask]);
+        lot.AddRun("PSF-24-0002", RunStatus.Passed, retest: true);
+        lot.AddRun("PSF-24-0003", RunStatus.Passed);
+        lot.AddRun("PSF-24-0003", RunStatus.Failed, [Mask], retest: true);
+        lot.AddRun("PSF-24-0003", RunStatus.Interrupted, retest: true);
+        lot.AddRun("PSF-24-0004", RunStatus.Stopped);
+        lot.AddRun("PSF-24-0005", RunStatus.Error);
+        lot.AddRun("PSF-24-0005", RunStatus.Stopped, retest: true);
+        lot.AddRun("PSF-24-0006", RunStatus.Passed);
+        lot.AddRun("PSF-24-0006", RunStatus.Passed, mode: RunMode.Tuning);
+        lot.AddRun("PSF-24-0007", RunStatus.Passed, finish: false);
+
+        var summary = LotSummary.Read(lot.Store, "PSF-24-L07");
+        var row = LotStore.Query(lot.Store.Path, "SELECT boards, passed, failed, other, yield_percent, runs FROM lot_summary WHERE lot = 'PSF-24-L07'").Single();
+        var verdicts = lot.Store.LatestVerdictPerSerial("PSF-24-L07");
+
+        // 0001 passed, then stopped: passed. 0002 failed, then passed: passed. 0003 passed, failed,
+        // then was interrupted: failed. 0004, 0005 and 0007 (still running) have no verdict.
+        Assert.Equal(["PSF-24-0001", "PSF-24-0002", "PSF-24-0003", "PSF-24-0006"], summary.Boards.Select(b => b.Serial));
+        Assert.Equal(["PSF-24-0004", "PSF-24-0005", "PSF-24-0007"], summary.Untested);
+        Assert.Equal(summary.Boards.Select(b => (b.Serial, b.Latest.Id, b.Latest.Status, b.Runs.Count + b.RunsWithoutVerdict)),
+            verdicts.Select(v => (v.DutSerial, v.RunId, v.Verdict, v.Runs)));
+        var y = summary.Yield!;
+        Assert.Equal(new object?[]
+            {
+                (long)(summary.Boards.Count + summary.Untested.Count), (long)y.Passed, (long)y.Failed, (long)summary.Untested.Count,
+                Math.Round(100 * y.Yield, 1), (long)summary.Runs.Count,
+            },
+            row);
+        Assert.Equal(new object?[] { 7L, 3L, 1L, 3L, 75.0, 12L }, row);
+    }
+
+    [Fact]
     public void Read_FigureSpread_MatchesTheHandbookCapabilityExample()
     {
         // REFERENCES: NIST/SEMATECH e-Handbook of Statistical Methods §6.1.6 (calc):

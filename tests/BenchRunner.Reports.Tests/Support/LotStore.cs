@@ -4,6 +4,7 @@ using BenchRunner.Core.Traces;
 using BenchRunner.Execution.LimitRecords;
 using BenchRunner.Execution.Plans;
 using BenchRunner.Storage;
+using Microsoft.Data.Sqlite;
 
 namespace BenchRunner.Reports.Tests.Support;
 
@@ -87,6 +88,29 @@ public sealed class LotStore : IDisposable
             Figures = FigureSummary.ForFilter(trace),
             AcquiredUtc = _clock.GetUtcNow(),
         });
+    }
+
+    /// <summary>The rows of <paramref name="sql"/> run on the file at <paramref name="path"/> with a plain SQLite connection.</summary>
+    public static List<object?[]> Query(string path, string sql)
+    {
+        using var connection = new SqliteConnection(new SqliteConnectionStringBuilder { DataSource = path, Pooling = false }.ToString());
+        connection.Open();
+        using var command = connection.CreateCommand();
+        command.CommandText = sql;
+        using var reader = command.ExecuteReader();
+        var rows = new List<object?[]>();
+        while (reader.Read())
+        {
+            var row = new object?[reader.FieldCount];
+            for (int i = 0; i < row.Length; i++)
+            {
+                row[i] = reader.IsDBNull(i) ? null : reader.GetValue(i);
+            }
+
+            rows.Add(row);
+        }
+
+        return rows;
     }
 
     /// <summary>Figures with only a centre frequency of <paramref name="hertz"/>.</summary>
