@@ -22,16 +22,11 @@ public static class RunCommand
     public static Command Create(CliConsole console, Func<TransportFactory> transports)
     {
         var plan = new Argument<string>("PLAN") { Description = "The test plan (docs/plan-format.md)." };
-        var bench = new Option<string>("--bench")
-        {
-            Description = "The bench file naming the instruments (docs/bench-format.md); docs/examples/bench-virtual.yaml is the built-in virtual bench.",
-            HelpName = "BENCH",
-            Required = true,
-        };
-        var db = new Option<string>("--db") { Description = $"The result database (created if missing). Default {ResultsCommand.DefaultDatabase}.", HelpName = "FILE", DefaultValueFactory = _ => ResultsCommand.DefaultDatabase };
-        var dut = new Option<string?>("--dut") { Description = "The board's serial number, stored with the run.", HelpName = "SERIAL" };
+        var bench = CommonOptions.RequiredBench("The bench file naming the instruments (docs/bench-format.md); docs/examples/bench-virtual.yaml is the built-in virtual bench.");
+        var db = CommonOptions.Database(CommonOptions.WrittenDatabase);
+        var dut = CommonOptions.Dut("The board's serial number, stored with the run.");
         var lot = new Option<string?>("--lot") { Description = "The lot the board belongs to.", HelpName = "LOT" };
-        var op = new Option<string?>("--operator") { Description = "Who runs the test.", HelpName = "NAME" };
+        var op = CommonOptions.Operator("Who runs the test.");
         var json = CommonOptions.Json();
         var command = new Command("run", "Run a test plan on a bench, record every sweep and give the verdict. Exit 0 pass, 1 fail, 2 bad input, 3 instrument failure, 130 stopped.")
         {
