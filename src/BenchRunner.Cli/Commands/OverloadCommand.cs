@@ -110,13 +110,7 @@ public static class OverloadCommand
                 WriteText(outcome, check, dbPath, console);
             }
 
-            return outcome.Status switch
-            {
-                RunStatus.Passed => ExitCodes.Success,
-                RunStatus.Failed => ExitCodes.CheckFailed,
-                RunStatus.Stopped => ExitCodes.Stopped,
-                _ => ExitCodes.InstrumentFailure,
-            };
+            return RunOutcomeView.ExitCode(outcome.Status);
         });
         return command;
     }
@@ -160,27 +154,20 @@ public static class OverloadCommand
             OverloadLinesView.Write(check.Lines, writer, "  ", console.UseColour);
         }
 
-        writer.WriteLine($"Stored as run {outcome.RunId} in {db} (benchrunner results --db {db} --run {outcome.RunId}).");
+        writer.WriteLine($"Stored as run {outcome.RunId} in {db} {RunOutcomeView.ResultsHint(db, outcome.RunId)}.");
     }
 
     private static void WriteJson(RunOutcome outcome, CheckResult? check, OverloadRequest request, string db, TextWriter writer)
     {
-        var document = new JsonObject
-        {
-            ["run_id"] = outcome.RunId,
-            ["database"] = db,
-            ["status"] = outcome.Status.ToString().ToLowerInvariant(),
-            ["passed"] = outcome.Status == RunStatus.Passed,
-            ["error"] = outcome.Error,
-            ["analyser"] = request.Analyser,
-            ["start_hz"] = request.Start.Hertz,
-            ["stop_hz"] = request.Stop.Hertz,
-            ["attenuation_db"] = request.Attenuation.Decibels,
-            ["raised_attenuation_db"] = (request.Attenuation + request.RaiseBy).Decibels,
-            ["detail"] = check?.Detail,
-            ["overloaded"] = check?.Lines.Any(l => l.IsAnalyserMade || l.Class == Core.Validity.OverloadClass.ChangedOtherwise),
-            ["lines"] = check is null ? null : OverloadLinesView.Json(check.Lines),
-        };
+        var document = RunOutcomeView.JsonHead(outcome, db);
+        document["analyser"] = request.Analyser;
+        document["start_hz"] = request.Start.Hertz;
+        document["stop_hz"] = request.Stop.Hertz;
+        document["attenuation_db"] = request.Attenuation.Decibels;
+        document["raised_attenuation_db"] = (request.Attenuation + request.RaiseBy).Decibels;
+        document["detail"] = check?.Detail;
+        document["overloaded"] = check?.Lines.Any(l => l.IsAnalyserMade || l.Class == Core.Validity.OverloadClass.ChangedOtherwise);
+        document["lines"] = check is null ? null : OverloadLinesView.Json(check.Lines);
         writer.WriteLine(document.ToJsonString(Indented));
     }
 }

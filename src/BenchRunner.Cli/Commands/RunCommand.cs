@@ -62,13 +62,7 @@ public static class RunCommand
                 WriteText(outcome, dbPath, console.Out, console.UseColour);
             }
 
-            return outcome.Status switch
-            {
-                RunStatus.Passed => ExitCodes.Success,
-                RunStatus.Failed => ExitCodes.CheckFailed,
-                RunStatus.Stopped => ExitCodes.Stopped,
-                _ => ExitCodes.InstrumentFailure,
-            };
+            return RunOutcomeView.ExitCode(outcome.Status);
         });
         return command;
     }
@@ -103,25 +97,18 @@ public static class RunCommand
             writer.WriteLine(Display.Colour($"  {flagged} check(s) judged a trace measured while the analyser was overloaded; do not trust their verdicts until it is measured again with more attenuation.", ConsoleColour.Yellow, colour));
         }
 
-        writer.WriteLine($"{outcome.Checks.Count(c => c.Passed)} of {outcome.Checks.Count} checks passed; run {outcome.RunId} stored in {db} (benchrunner results --db {db} --run {outcome.RunId}).");
+        writer.WriteLine($"{outcome.Checks.Count(c => c.Passed)} of {outcome.Checks.Count} checks passed; run {outcome.RunId} stored in {db} {RunOutcomeView.ResultsHint(db, outcome.RunId)}.");
     }
 
     private static void WriteJson(RunOutcome outcome, string db, TextWriter writer)
     {
-        var document = new JsonObject
+        var document = RunOutcomeView.JsonHead(outcome, db);
+        document["checks"] = new JsonArray(outcome.Checks.Select(c => (JsonNode?)new JsonObject
         {
-            ["run_id"] = outcome.RunId,
-            ["database"] = db,
-            ["status"] = outcome.Status.ToString().ToLowerInvariant(),
-            ["passed"] = outcome.Status == RunStatus.Passed,
-            ["error"] = outcome.Error,
-            ["checks"] = new JsonArray(outcome.Checks.Select(c => (JsonNode?)new JsonObject
-            {
-                ["step"] = c.Step, ["name"] = c.Name, ["passed"] = c.Passed, ["detail"] = c.Detail,
-                ["margin"] = c.Margin, ["margin_unit"] = c.MarginUnit, ["trace_overloaded"] = c.TraceOverloaded,
-                ["lines"] = c.Lines.Count == 0 ? null : OverloadLinesView.Json(c.Lines),
-            }).ToArray()),
-        };
+            ["step"] = c.Step, ["name"] = c.Name, ["passed"] = c.Passed, ["detail"] = c.Detail,
+            ["margin"] = c.Margin, ["margin_unit"] = c.MarginUnit, ["trace_overloaded"] = c.TraceOverloaded,
+            ["lines"] = c.Lines.Count == 0 ? null : OverloadLinesView.Json(c.Lines),
+        }).ToArray());
         writer.WriteLine(document.ToJsonString(new JsonSerializerOptions { WriteIndented = true }));
     }
 }
