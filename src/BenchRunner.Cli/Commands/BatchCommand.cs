@@ -38,8 +38,8 @@ public static class BatchCommand
             Description = "A file with one serial per line ('#' starts a comment), or - to read them from standard input without prompts. Default: ask for each serial (type it, or scan its barcode).",
             HelpName = "FILE",
         };
-        var db = new Option<string>("--db") { Description = $"The result database (created if missing). Default {ResultsCommand.DefaultDatabase}.", HelpName = "FILE", DefaultValueFactory = _ => ResultsCommand.DefaultDatabase };
-        var op = new Option<string?>("--operator") { Description = "Who tests the boards.", HelpName = "NAME" };
+        var db = CommonOptions.Database(CommonOptions.WrittenDatabase);
+        var op = CommonOptions.Operator("Who tests the boards.");
         var json = CommonOptions.Json();
         var command = new Command("batch", "Test a lot of boards one by one: PASS/FAIL for each at once, yield as you go, and a lot summary with Cpk at the end. Exit 0 all passed, 1 a board failed, 2 bad input, 3 a test could not finish, 130 stopped.")
         {

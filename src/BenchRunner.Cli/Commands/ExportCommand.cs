@@ -17,7 +17,7 @@ public static class ExportCommand
     /// <summary>Creates the verb.</summary>
     public static Command Create(CliConsole console)
     {
-        var db = new Option<string>("--db") { Description = $"The result database. Default {ResultsCommand.DefaultDatabase} in the current folder.", HelpName = "FILE", DefaultValueFactory = _ => ResultsCommand.DefaultDatabase };
+        var db = CommonOptions.Database(CommonOptions.ReadDatabase);
         var run = new Option<long>("--run") { Description = "The run whose sweeps to write.", HelpName = "ID", Required = true };
         var format = new Option<string>("--format") { Description = "touchstone: S-parameters as .s1p/.s2p where a file can hold them, the rest as CSV; csv: every sweep as CSV.", HelpName = "FORMAT", Required = true };
         format.AcceptOnlyFromAmong("touchstone", "csv");

@@ -30,12 +30,7 @@ public static class OverloadCommand
     /// <summary>Creates the verb.</summary>
     public static Command Create(CliConsole console, Func<TransportFactory> transports)
     {
-        var bench = new Option<string>("--bench")
-        {
-            Description = "The bench file (docs/bench-format.md); docs/examples/bench-virtual.yaml is the built-in virtual bench.",
-            HelpName = "BENCH",
-            Required = true,
-        };
+        var bench = CommonOptions.RequiredBench("The bench file (docs/bench-format.md); docs/examples/bench-virtual.yaml is the built-in virtual bench.");
         var role = new Option<string?>("--analyser") { Description = "The spectrum analyser's role; needed only when the bench has several.", HelpName = "ROLE" };
         var centre = new Option<string?>("--centre") { Description = "The span's centre, e.g. 137.5MHz (with --span).", HelpName = "FREQ" };
         var span = new Option<string?>("--span") { Description = "The span's width, e.g. 4MHz (with --centre).", HelpName = "FREQ" };
@@ -51,7 +46,7 @@ public static class OverloadCommand
         var tone = new Option<string?>("--tone") { Description = "Set the bench's signal generator to this frequency and switch it on for the check (off afterwards).", HelpName = "FREQ" };
         var toneLevel = new Option<string?>("--tone-level") { Description = "The test tone's level (checked against the bench's safety limits).", HelpName = "DBM" };
         var generator = new Option<string?>("--generator") { Description = "The generator's role for --tone; needed only when the bench has several.", HelpName = "ROLE" };
-        var db = new Option<string>("--db") { Description = "The result database (created if missing).", HelpName = "FILE", DefaultValueFactory = _ => ResultsCommand.DefaultDatabase };
+        var db = CommonOptions.Database("The result database (created if missing).");
         var json = CommonOptions.Json();
         var command = new Command("overload", "Tell real spectral lines from those the spectrum analyser makes itself: sweep, sweep again with more input attenuation, and label each line. Exit 0 no relied-on line analyser-made, 1 one is, 2 bad input, 3 instrument failure, 130 stopped.")
         {
@@ -115,13 +110,7 @@ public static class OverloadCommand
                 WriteText(outcome, check, dbPath, console);
             }
 
-            return outcome.Status switch
-            {
-                RunStatus.Passed => ExitCodes.Success,
-                RunStatus.Failed => ExitCodes.CheckFailed,
-                RunStatus.Stopped => ExitCodes.Stopped,
-                _ => ExitCodes.InstrumentFailure,
-            };
+            return RunOutcomeView.ExitCode(outcome.Status);
         });
         return command;
     }
@@ -165,27 +154,20 @@ public static class OverloadCommand
             OverloadLinesView.Write(check.Lines, writer, "  ", console.UseColour);
         }
 
-        writer.WriteLine($"Stored as run {outcome.RunId} in {db} (benchrunner results --db {db} --run {outcome.RunId}).");
+        writer.WriteLine($"Stored as run {outcome.RunId} in {db} {RunOutcomeView.ResultsHint(db, outcome.RunId)}.");
     }
 
     private static void WriteJson(RunOutcome outcome, CheckResult? check, OverloadRequest request, string db, TextWriter writer)
     {
-        var document = new JsonObject
-        {
-            ["run_id"] = outcome.RunId,
-            ["database"] = db,
-            ["status"] = outcome.Status.ToString().ToLowerInvariant(),
-            ["passed"] = outcome.Status == RunStatus.Passed,
-            ["error"] = outcome.Error,
-            ["analyser"] = request.Analyser,
-            ["start_hz"] = request.Start.Hertz,
-            ["stop_hz"] = request.Stop.Hertz,
-            ["attenuation_db"] = request.Attenuation.Decibels,
-            ["raised_attenuation_db"] = (request.Attenuation + request.RaiseBy).Decibels,
-            ["detail"] = check?.Detail,
-            ["overloaded"] = check?.Lines.Any(l => l.IsAnalyserMade || l.Class == Core.Validity.OverloadClass.ChangedOtherwise),
-            ["lines"] = check is null ? null : OverloadLinesView.Json(check.Lines),
-        };
+        var document = RunOutcomeView.JsonHead(outcome, db);
+        document["analyser"] = request.Analyser;
+        document["start_hz"] = request.Start.Hertz;
+        document["stop_hz"] = request.Stop.Hertz;
+        document["attenuation_db"] = request.Attenuation.Decibels;
+        document["raised_attenuation_db"] = (request.Attenuation + request.RaiseBy).Decibels;
+        document["detail"] = check?.Detail;
+        document["overloaded"] = check?.Lines.Any(l => l.IsAnalyserMade || l.Class == Core.Validity.OverloadClass.ChangedOtherwise);
+        document["lines"] = check is null ? null : OverloadLinesView.Json(check.Lines);
         writer.WriteLine(document.ToJsonString(Indented));
     }
 }

@@ -16,7 +16,7 @@ public static class ReportCommand
     public static Command Create(CliConsole console, TimeProvider? time = null)
     {
         var clock = time ?? TimeProvider.System;
-        var db = new Option<string>("--db") { Description = $"The result database. Default {ResultsCommand.DefaultDatabase} in the current folder.", HelpName = "FILE", DefaultValueFactory = _ => ResultsCommand.DefaultDatabase };
+        var db = CommonOptions.Database(CommonOptions.ReadDatabase);
         var run = new Option<long?>("--run") { Description = "Report on this run: its record, instruments, checks, each trace against its mask, its figures (and, for a tuning session, the figures over time).", HelpName = "ID" };
         var lot = new Option<string?>("--lot") { Description = "Report on this lot: yield, failures by check, each figure's histogram and Cpk against its limits, every board.", HelpName = "LOT" };
         var output = new Option<string>("--output", "-o") { Description = "The HTML file to write.", HelpName = "FILE.html", Required = true };

@@ -17,7 +17,7 @@ public static class ResultsCommand
     /// <summary>Creates the verb.</summary>
     public static Command Create(CliConsole console)
     {
-        var db = new Option<string>("--db") { Description = $"The result database. Default {DefaultDatabase} in the current folder.", HelpName = "FILE", DefaultValueFactory = _ => DefaultDatabase };
+        var db = CommonOptions.Database(CommonOptions.ReadDatabase);
         var run = new Option<long?>("--run") { Description = "Show this run in detail: instruments, checks, and the figures of every sweep.", HelpName = "ID" };
         var dut = new Option<string?>("--dut") { Description = "Only runs of this board serial.", HelpName = "SERIAL" };
         var lot = new Option<string?>("--lot") { Description = "Only runs of this lot.", HelpName = "LOT" };

@@ -23,16 +23,11 @@ public static class RunCommand
     public static Command Create(CliConsole console, Func<TransportFactory> transports)
     {
         var plan = new Argument<string>("PLAN") { Description = "The test plan (docs/plan-format.md)." };
-        var bench = new Option<string>("--bench")
-        {
-            Description = "The bench file naming the instruments (docs/bench-format.md); docs/examples/bench-virtual.yaml is the built-in virtual bench.",
-            HelpName = "BENCH",
-            Required = true,
-        };
-        var db = new Option<string>("--db") { Description = $"The result database (created if missing). Default {ResultsCommand.DefaultDatabase}.", HelpName = "FILE", DefaultValueFactory = _ => ResultsCommand.DefaultDatabase };
-        var dut = new Option<string?>("--dut") { Description = "The board's serial number, stored with the run.", HelpName = "SERIAL" };
+        var bench = CommonOptions.RequiredBench("The bench file naming the instruments (docs/bench-format.md); docs/examples/bench-virtual.yaml is the built-in virtual bench.");
+        var db = CommonOptions.Database(CommonOptions.WrittenDatabase);
+        var dut = CommonOptions.Dut("The board's serial number, stored with the run.");
         var lot = new Option<string?>("--lot") { Description = "The lot the board belongs to.", HelpName = "LOT" };
-        var op = new Option<string?>("--operator") { Description = "Who runs the test.", HelpName = "NAME" };
+        var op = CommonOptions.Operator("Who runs the test.");
         var json = CommonOptions.Json();
         var command = new Command("run", "Run a test plan on a bench, record every sweep and give the verdict. Exit 0 pass, 1 fail, 2 bad input, 3 instrument failure, 130 stopped.")
         {
@@ -68,13 +63,7 @@ public static class RunCommand
                 WriteText(outcome, dbPath, console.Out, console.UseColour);
             }
 
-            return outcome.Status switch
-            {
-                RunStatus.Passed => ExitCodes.Success,
-                RunStatus.Failed => ExitCodes.CheckFailed,
-                RunStatus.Stopped => ExitCodes.Stopped,
-                _ => ExitCodes.InstrumentFailure,
-            };
+            return RunOutcomeView.ExitCode(outcome.Status);
         });
         return command;
     }
@@ -109,25 +98,18 @@ public static class RunCommand
             writer.WriteLine(Display.Colour($"  {flagged} check(s) judged a trace measured while the analyser was overloaded; do not trust their verdicts until it is measured again with more attenuation.", ConsoleColour.Yellow, colour));
         }
 
-        writer.WriteLine($"{outcome.Checks.Count(c => c.Passed)} of {Counted.Of(outcome.Checks.Count, "check")} passed; run {outcome.RunId} stored in {db} (benchrunner results --db {db} --run {outcome.RunId}).");
+        writer.WriteLine($"{outcome.Checks.Count(c => c.Passed)} of {Counted.Of(outcome.Checks.Count, "check")} passed; run {outcome.RunId} stored in {db} {RunOutcomeView.ResultsHint(db, outcome.RunId)}.");
     }
 
     private static void WriteJson(RunOutcome outcome, string db, TextWriter writer)
     {
-        var document = new JsonObject
+        var document = RunOutcomeView.JsonHead(outcome, db);
+        document["checks"] = new JsonArray(outcome.Checks.Select(c => (JsonNode?)new JsonObject
         {
-            ["run_id"] = outcome.RunId,
-            ["database"] = db,
-            ["status"] = outcome.Status.ToString().ToLowerInvariant(),
-            ["passed"] = outcome.Status == RunStatus.Passed,
-            ["error"] = outcome.Error,
-            ["checks"] = new JsonArray(outcome.Checks.Select(c => (JsonNode?)new JsonObject
-            {
-                ["step"] = c.Step, ["name"] = c.Name, ["passed"] = c.Passed, ["detail"] = c.Detail,
-                ["margin"] = c.Margin, ["margin_unit"] = c.MarginUnit, ["trace_overloaded"] = c.TraceOverloaded,
-                ["lines"] = c.Lines.Count == 0 ? null : OverloadLinesView.Json(c.Lines),
-            }).ToArray()),
-        };
+            ["step"] = c.Step, ["name"] = c.Name, ["passed"] = c.Passed, ["detail"] = c.Detail,
+            ["margin"] = c.Margin, ["margin_unit"] = c.MarginUnit, ["trace_overloaded"] = c.TraceOverloaded,
+            ["lines"] = c.Lines.Count == 0 ? null : OverloadLinesView.Json(c.Lines),
+        }).ToArray());
         writer.WriteLine(document.ToJsonString(new JsonSerializerOptions { WriteIndented = true }));
     }
 }

@@ -46,8 +46,8 @@ public static class TuneCommand
         var max = new Option<int?>("--max-sweeps") { Description = "End after this many sweeps whatever happens.", HelpName = "N" };
         var plain = new Option<bool>("--plain") { Description = "One plain line per sweep even on a terminal (the default when the output is not a terminal)." };
         var db = new Option<string?>("--db") { Description = $"The result database (created if missing). Default {ResultsCommand.DefaultDatabase}; {DemoCommand.DefaultDatabase} for the demo.", HelpName = "FILE" };
-        var dut = new Option<string?>("--dut") { Description = "The board's serial number, stored with the run.", HelpName = "SERIAL" };
-        var op = new Option<string?>("--operator") { Description = "Who tunes the board.", HelpName = "NAME" };
+        var dut = CommonOptions.Dut("The board's serial number, stored with the run.");
+        var op = CommonOptions.Operator("Who tunes the board.");
         var turn = new Option<double>("--turn-time") { Description = "Demo only: how long the virtual technician takes to turn the trimmer, in seconds.", HelpName = "SECONDS", DefaultValueFactory = _ => TuningDemo.DefaultTurnTime.TotalSeconds };
         var seed = new Option<int>("--seed") { Description = "Demo only: seeds the virtual bench's noise.", HelpName = "N", DefaultValueFactory = _ => 1 };
         var json = CommonOptions.Json();

@@ -27,17 +27,7 @@ public static class OverloadLinesView
     }
 
     /// <summary>The lines as a JSON array (field names in docs/cli.md).</summary>
-    public static JsonArray Json(IReadOnlyList<JudgedLine> lines) => new([.. lines.Select(l => (JsonNode?)new JsonObject
-    {
-        ["frequency_hz"] = l.Frequency.Hertz,
-        ["level_dbm"] = Math.Round(l.LevelDbm, 3),
-        ["change_db"] = l.ChangeDb is { } c ? Math.Round(c, 3) : null,
-        ["class"] = OverloadWords.Key(l.Class),
-        ["analyser_made"] = l.IsAnalyserMade,
-        ["label"] = l.Label,
-        ["dbc"] = l.RelativeDbc is { } d ? Math.Round(d, 3) : null,
-        ["relied_on"] = l.Relied,
-    })]);
+    public static JsonArray Json(IReadOnlyList<JudgedLine> lines) => JudgedLineJson.Array(lines);
 
     private static List<Row>? ParseStored(string? detailJson)
     {
@@ -80,7 +70,7 @@ public static class OverloadLinesView
         foreach (var r in rows)
         {
             var verdict = r.AnalyserMade ? Display.Colour($"{r.Verdict,-30}", ConsoleColour.Red, colour) : $"{r.Verdict,-30}";
-            var change = r.ChangeDb is { } c ? $"{c.ToString("+0.0;-0.0;0.0", Invariant)} dB" : "gone";
+            var change = OverloadWords.Change(r.ChangeDb);
             var dbc = r.Dbc is { } d ? d.ToString("0.0", Invariant) : "-";
             var shown = PlanRunner.Shown(Frequency.FromHertz(r.Hertz));
             writer.WriteLine($"{indent}{shown,-14}  {Display.Level(Math.Round(r.LevelDbm, 1)),11}  {change,9}  {verdict}  {r.Label,-16}  {dbc,7}{(r.Relied ? "  relied on" : "")}");

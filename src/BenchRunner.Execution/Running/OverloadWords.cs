@@ -1,3 +1,4 @@
+using System.Globalization;
 using BenchRunner.Core.Validity;
 
 namespace BenchRunner.Execution.Running;
@@ -28,4 +29,8 @@ public static class OverloadWords
         OverloadClass.HiddenByNoise => "hidden_by_noise",
         _ => throw new ArgumentOutOfRangeException(nameof(verdict), verdict, "Not an overload class."),
     };
+
+    /// <summary>How a line's level moved, for people: <c>+0.3 dB</c>, <c>-10.0 dB</c>, or <c>gone</c> when it was not found again.</summary>
+    public static string Change(double? changeDb) =>
+        changeDb is { } c ? c.ToString("+0.0;-0.0;0.0", CultureInfo.InvariantCulture) + " dB" : "gone";
 }

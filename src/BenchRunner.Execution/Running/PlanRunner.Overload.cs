@@ -1,4 +1,3 @@
-using System.Globalization;
 using System.Text.Json.Nodes;
 using BenchRunner.Core.Figures;
 using BenchRunner.Core.Quantities;
@@ -197,7 +196,7 @@ public sealed partial class PlanRunner
 
     private static string Brief(JudgedLine line)
     {
-        var change = line.ChangeDb is { } c ? c.ToString("+0.0;-0.0;0.0", CultureInfo.InvariantCulture) + " dB" : "gone";
+        var change = OverloadWords.Change(line.ChangeDb);
         var label = line.Label == "unidentified" ? "" : $" {line.Label}";
         return $"{Shown(line.Frequency)}{label} ({change}, {line.Verdict})";
     }
@@ -216,16 +215,6 @@ public sealed partial class PlanRunner
             ["threshold_dbm"] = step.Threshold.Dbm,
             ["tolerance_db"] = step.ToleranceDb,
             ["compensation"] = compensation,
-            ["lines"] = new JsonArray([.. lines.Select(l => (JsonNode?)new JsonObject
-            {
-                ["frequency_hz"] = l.Frequency.Hertz,
-                ["level_dbm"] = Math.Round(l.LevelDbm, 3),
-                ["change_db"] = l.ChangeDb is { } c ? Math.Round(c, 3) : null,
-                ["class"] = OverloadWords.Key(l.Class),
-                ["analyser_made"] = l.IsAnalyserMade,
-                ["label"] = l.Label,
-                ["dbc"] = l.RelativeDbc is { } d ? Math.Round(d, 3) : null,
-                ["relied_on"] = l.Relied,
-            })]),
+            ["lines"] = JudgedLineJson.Array(lines),
         }.ToJsonString();
 }

@@ -28,25 +28,7 @@ public sealed class RunCommandTests
     public void Run_LimitTheBoardMisses_FailsWithExitCodeOneNamingTheCheck()
     {
         using var dir = new TempDirectory();
-        var plan = dir.Write("tight.yaml", """
-            plan: tight
-            roles:
-              vna: network-analyser
-            steps:
-              - set-network-analyser:
-                  role: vna
-                  start: 127.5 MHz
-                  stop: 147.5 MHz
-                  points: 401
-              - sweep:
-                  role: vna
-                  traces:
-                    S21: passband
-              - check-figures:
-                  trace: passband
-                  figures:
-                    insertion_loss_db: { max: 1 dB }
-            """);
+        var plan = TestPlans.WriteTight(dir, points: 401);
 
         var run = CliRun.Of("run", plan, "--bench", Bench, "--db", dir.PathOf("runs.db"));
 

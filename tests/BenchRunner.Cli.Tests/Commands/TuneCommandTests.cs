@@ -76,25 +76,7 @@ public sealed partial class TuneCommandTests
     public void Tune_TargetNeverMet_EndsAtTheSweepLimitWithExitCodeOne()
     {
         using var dir = new TempDirectory();
-        var plan = dir.Write("tight.yaml", """
-            plan: tight
-            roles:
-              vna: network-analyser
-            steps:
-              - set-network-analyser:
-                  role: vna
-                  start: 127.5 MHz
-                  stop: 147.5 MHz
-                  points: 201
-              - sweep:
-                  role: vna
-                  traces:
-                    S21: passband
-              - check-figures:
-                  trace: passband
-                  figures:
-                    insertion_loss_db: { max: 1 dB }
-            """);
+        var plan = TestPlans.WriteTight(dir, points: 201);
 
         var run = CliRun.Of("tune", plan, "--bench", Bench, "--max-sweeps", "2", "--interval", "0", "--db", dir.PathOf("tune.db"));
 

@@ -3,11 +3,11 @@ using BenchRunner.Execution.Bench;
 using BenchRunner.Execution.LimitRecords;
 using BenchRunner.Execution.Plans;
 using BenchRunner.Execution.Running;
+using BenchRunner.Execution.Tests.Support;
 using BenchRunner.Instruments.Connections;
 using BenchRunner.Simulator.Bench;
 using BenchRunner.Simulator.Circuits;
 using BenchRunner.Simulator.Devices;
-using BenchRunner.Simulator.Endpoints;
 using BenchRunner.Storage;
 
 namespace BenchRunner.Execution.Tests.Batch;
@@ -54,11 +54,8 @@ public sealed class BatchSessionTests : IDisposable
 
     private BatchSession Session()
     {
-        var transports = SimulatorConnections.Register(new TransportFactory(), new VirtualBenchServers(_bench));
-        var definition = BenchFile.Load(RepositoryFiles.Example("bench-virtual.yaml"));
-        var plan = PlanFile.Load(RepositoryFiles.Example("plans/psf-137-check.yaml"));
-        var runner = new PlanRunner(definition, transports, _store);
-        return new BatchSession(runner, plan, new RunContext("plan text", null, "0.1.0", "test-host") { Lot = "PSF-24-L07", Operator = "tester" }, _store, _boards);
+        var runner = VirtualRuns.Runner(_bench, _store);
+        return new BatchSession(runner, VirtualRuns.CheckPlan(), VirtualRuns.Context() with { Lot = "PSF-24-L07", Operator = "tester" }, _store, _boards);
     }
 
     [Fact]

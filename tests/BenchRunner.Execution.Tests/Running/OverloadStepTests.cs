@@ -4,9 +4,8 @@ using BenchRunner.Core.Validity;
 using BenchRunner.Execution.Bench;
 using BenchRunner.Execution.Plans;
 using BenchRunner.Execution.Running;
-using BenchRunner.Instruments.Connections;
+using BenchRunner.Execution.Tests.Support;
 using BenchRunner.Simulator.Bench;
-using BenchRunner.Simulator.Endpoints;
 using BenchRunner.Simulator.Generator;
 using BenchRunner.Storage;
 
@@ -15,8 +14,6 @@ namespace BenchRunner.Execution.Tests.Running;
 /// <summary>The check-overload step on the virtual bench: the analyser's own harmonics against the generator's real ones.</summary>
 public sealed class OverloadStepTests
 {
-    private static readonly TimeSpan Limit = TimeSpan.FromSeconds(60);
-
     /// <summary>
     /// A generator at −6 dBm through the bench's 1 dB cable (−7 dBm at the analyser) with a real
     /// 2nd harmonic at −20 dBc and a 3rd at −80 dBc, into an analyser with IIP2 +35 dBm and IIP3
@@ -33,8 +30,7 @@ public sealed class OverloadStepTests
     {
         var harmonics = new[] { GeneratorHarmonic.Of(2, Ratio.FromDecibels(-20)), GeneratorHarmonic.Of(3, Ratio.FromDecibels(-80)) };
         var bench = new VirtualBench(5, path: FixedPath.Loss(Ratio.FromDecibels(1)), generatorOptions: new SignalGeneratorOptions { Harmonics = harmonics });
-        var transports = SimulatorConnections.Register(new TransportFactory(), new VirtualBenchServers(bench));
-        return (new PlanRunner(definition, transports, store), bench);
+        return (VirtualRuns.Runner(bench, store, definition), bench);
     }
 
     private static TestPlan Plan(string lines, string level = "-6 dBm") => PlanFile.Parse($$"""
@@ -56,7 +52,7 @@ public sealed class OverloadStepTests
             check-figures: { trace: harmonics, figures: { peak_dbm: { min: -20 dBm } } }
         """, "harmonics.yaml", RepositoryFiles.PathOf("docs/examples/plans"));
 
-    private static RunContext Context() => new("plan text", null, "0.1.0", "test-host") { DutSerial = "PSF-24-0001" };
+    private static RunContext Context() => VirtualRuns.Context() with { DutSerial = "PSF-24-0001" };
 
     private static JudgedLine LineAt(CheckResult check, double megahertz) =>
         Assert.Single(check.Lines, l => Math.Abs(l.Frequency.Megahertz - megahertz) < 1);
@@ -66,7 +62,7 @@ public sealed class OverloadStepTests
     {
         var (runner, _) = Create(store: null);
 
-        var outcome = await runner.RunAsync(Plan("lines: [275 MHz]"), Context(), null, CancellationToken.None).WaitAsync(Limit);
+        var outcome = await runner.RunAsync(Plan("lines: [275 MHz]"), Context(), null, CancellationToken.None).WaitAsync(VirtualRuns.Limit);
 
         var check = outcome.Checks[0];
         var carrier = LineAt(check, 137.5);
@@ -99,7 +95,7 @@ public sealed class OverloadStepTests
     {
         var (runner, _) = Create(store: null);
 
-        var outcome = await runner.RunAsync(Plan("lines: [412.5 MHz]"), Context(), null, CancellationToken.None).WaitAsync(Limit);
+        var outcome = await runner.RunAsync(Plan("lines: [412.5 MHz]"), Context(), null, CancellationToken.None).WaitAsync(VirtualRuns.Limit);
 
         var check = outcome.Checks[0];
         Assert.False(check.Passed);
@@ -114,7 +110,7 @@ public sealed class OverloadStepTests
         // At −31 dBm into the analyser its own 3rd harmonic is 3·(−31) − 20 = −113 dBm, far below the floor.
         var (runner, _) = Create(store: null);
 
-        var outcome = await runner.RunAsync(Plan("", level: "-30 dBm"), Context(), null, CancellationToken.None).WaitAsync(Limit);
+        var outcome = await runner.RunAsync(Plan("", level: "-30 dBm"), Context(), null, CancellationToken.None).WaitAsync(VirtualRuns.Limit);
 
         var check = outcome.Checks[0];
         Assert.True(check.Passed, check.Detail);
@@ -130,7 +126,7 @@ public sealed class OverloadStepTests
         using var store = ResultStore.Open(dir.PathOf("runs.db"));
         var (runner, bench) = Create(store);
 
-        var outcome = await runner.RunAsync(Plan("lines: [275 MHz]"), Context(), null, CancellationToken.None).WaitAsync(Limit);
+        var outcome = await runner.RunAsync(Plan("lines: [275 MHz]"), Context(), null, CancellationToken.None).WaitAsync(VirtualRuns.Limit);
 
         var runId = outcome.RunId!.Value;
         var sweeps = store.GetSweeps(runId);
@@ -166,7 +162,7 @@ public sealed class OverloadStepTests
               - check-figures: { trace: probed, figures: { peak_dbm: { target: 9.1 dBm, tolerance: 0.5 dB } } }
             """, "probed.yaml", dir.Path);
 
-        var outcome = await runner.RunAsync(plan, Context(), null, CancellationToken.None).WaitAsync(Limit);
+        var outcome = await runner.RunAsync(plan, Context(), null, CancellationToken.None).WaitAsync(VirtualRuns.Limit);
 
         // −30 dBm − 1 dB cable = −31 dBm at the analyser; + 39.554 dB probe (REFERENCES.md [calc]) + 0.3 dB DC block
         // + 0.375 dB cable at 137.5 MHz (interpolated between 0.2 dB at 50 MHz and 0.4 dB at 150 MHz) = +9.229 dBm at the
@@ -200,21 +196,14 @@ public sealed class OverloadStepTests
               - set-spectrum-analyser: { role: sa, centre: 137.5 MHz, span: 4 MHz }
               - sweep: { role: sa, traces: { power: wide } }
             """, "wide.yaml", dir.Path);
-        var observer = new Collector();
+        var observer = new CollectingObserver();
 
-        var outcome = await runner.RunAsync(plan, Context(), observer, CancellationToken.None).WaitAsync(Limit);
+        var outcome = await runner.RunAsync(plan, Context(), observer, CancellationToken.None).WaitAsync(VirtualRuns.Limit);
 
         Assert.True(outcome.Status == RunStatus.Passed, outcome.Error);
         var sweep = Assert.Single(store.GetSweeps(outcome.RunId!.Value));
         Assert.Equal(SweepFlags.Uncalibrated, sweep.Record.Flags);
         Assert.StartsWith("not compensated: 135.5 MHz is outside the cable loss table", sweep.Record.Compensation);
         Assert.Contains(observer.Events.OfType<OperatorMessage>(), m => m.Text.Contains("NOT compensated", StringComparison.Ordinal));
-    }
-
-    private sealed class Collector : IRunObserver
-    {
-        public List<RunEvent> Events { get; } = [];
-
-        public void OnEvent(RunEvent runEvent) => Events.Add(runEvent);
     }
 }

@@ -1,41 +1,28 @@
-using BenchRunner.Execution.Bench;
-using BenchRunner.Execution.Plans;
 using BenchRunner.Execution.Running;
-using BenchRunner.Instruments.Connections;
+using BenchRunner.Execution.Tests.Support;
 using BenchRunner.Simulator.Bench;
-using BenchRunner.Simulator.Endpoints;
 using BenchRunner.Storage;
 
 namespace BenchRunner.Execution.Tests.Running;
 
 public sealed class PlanRunnerRepeatTests
 {
-    private static readonly TimeSpan Limit = TimeSpan.FromSeconds(60);
-
-    private sealed class Collector : IRunObserver
-    {
-        public List<RunEvent> Events { get; } = [];
-
-        public void OnEvent(RunEvent runEvent) => Events.Add(runEvent);
-    }
-
     [Fact]
     public async Task RunRepeatedly_StepsBeforeTheFirstSweepRunOnceTheRestEveryPass_AllInOneRun()
     {
         using var dir = new TempDirectory();
         using var store = ResultStore.Open(dir.PathOf("runs.db"));
-        var transports = SimulatorConnections.Register(new TransportFactory(), new VirtualBenchServers(VirtualBench.CreateDemo(seed: 2)));
-        var runner = new PlanRunner(BenchFile.Load(RepositoryFiles.Example("bench-virtual.yaml")), transports, store);
-        var plan = PlanFile.Load(RepositoryFiles.Example("plans/psf-137-check.yaml"));
-        var observer = new Collector();
+        var runner = VirtualRuns.Runner(VirtualBench.CreateDemo(seed: 2), store);
+        var plan = VirtualRuns.CheckPlan();
+        var observer = new CollectingObserver();
         var passes = new List<int>();
 
-        var outcome = await runner.RunRepeatedlyAsync(plan, new RunContext("plan text", null, "0.1.0", "test-host") { Mode = RunMode.Tuning }, observer,
+        var outcome = await runner.RunRepeatedlyAsync(plan, VirtualRuns.Context() with { Mode = RunMode.Tuning }, observer,
             (pass, _) =>
             {
                 passes.Add(pass);
                 return ValueTask.FromResult(pass < 3);
-            }, CancellationToken.None).WaitAsync(Limit);
+            }, CancellationToken.None).WaitAsync(VirtualRuns.Limit);
 
         Assert.Equal([1, 2, 3], passes);
         Assert.Equal(RunStatus.Passed, outcome.Status);
@@ -56,11 +43,10 @@ public sealed class PlanRunnerRepeatTests
     {
         using var dir = new TempDirectory();
         using var store = ResultStore.Open(dir.PathOf("runs.db"));
-        var transports = SimulatorConnections.Register(new TransportFactory(), new VirtualBenchServers(VirtualBench.CreateDemo(seed: 2)));
-        var runner = new PlanRunner(BenchFile.Load(RepositoryFiles.Example("bench-virtual.yaml")), transports, store);
+        var runner = VirtualRuns.Runner(VirtualBench.CreateDemo(seed: 2), store);
 
-        var outcome = await runner.RunAsync(PlanFile.Load(RepositoryFiles.Example("plans/psf-137-check.yaml")),
-            new RunContext("plan text", null, "0.1.0", "test-host"), null, CancellationToken.None).WaitAsync(Limit);
+        var outcome = await runner.RunAsync(VirtualRuns.CheckPlan(),
+            VirtualRuns.Context(), null, CancellationToken.None).WaitAsync(VirtualRuns.Limit);
 
         Assert.Equal(RunMode.Single, store.GetRun(outcome.RunId!.Value)!.Record.Mode);
     }

@@ -1,32 +1,19 @@
 using BenchRunner.Core.Quantities;
-using BenchRunner.Execution.Bench;
 using BenchRunner.Execution.Plans;
 using BenchRunner.Execution.Running;
-using BenchRunner.Instruments.Connections;
+using BenchRunner.Execution.Tests.Support;
 using BenchRunner.Simulator.Bench;
 using BenchRunner.Simulator.Devices;
-using BenchRunner.Simulator.Endpoints;
 using BenchRunner.Storage;
 
 namespace BenchRunner.Execution.Tests.Running;
 
 public sealed class PlanRunnerTests
 {
-    private static readonly TimeSpan Limit = TimeSpan.FromSeconds(60);
-
-    private sealed class Collector : IRunObserver
-    {
-        public List<RunEvent> Events { get; } = [];
-
-        public void OnEvent(RunEvent runEvent) => Events.Add(runEvent);
-    }
-
     private static (PlanRunner Runner, VirtualBench Bench) Create(ResultStore? store)
     {
         var bench = VirtualBench.CreateDemo(seed: 3);
-        var transports = SimulatorConnections.Register(new TransportFactory(), new VirtualBenchServers(bench));
-        var definition = BenchFile.Load(RepositoryFiles.Example("bench-virtual.yaml"));
-        return (new PlanRunner(definition, transports, store), bench);
+        return (VirtualRuns.Runner(bench, store), bench);
     }
 
     private static RunContext Context(string serial) => new("plan text", null, "0.1.0", "test-host") { DutSerial = serial, Lot = "PSF-24-L07" };
@@ -37,10 +24,10 @@ public sealed class PlanRunnerTests
         using var dir = new TempDirectory();
         using var store = ResultStore.Open(dir.PathOf("runs.db"));
         var (runner, _) = Create(store);
-        var plan = PlanFile.Load(RepositoryFiles.Example("plans/psf-137-check.yaml"));
-        var observer = new Collector();
+        var plan = VirtualRuns.CheckPlan();
+        var observer = new CollectingObserver();
 
-        var outcome = await runner.RunAsync(plan, Context("PSF-24-0001"), observer, CancellationToken.None).WaitAsync(Limit);
+        var outcome = await runner.RunAsync(plan, Context("PSF-24-0001"), observer, CancellationToken.None).WaitAsync(VirtualRuns.Limit);
 
         Assert.Equal(RunStatus.Passed, outcome.Status);
         Assert.All(outcome.Checks, c => Assert.True(c.Passed, c.Name + ": " + c.Detail));
@@ -59,9 +46,9 @@ public sealed class PlanRunnerTests
     {
         var (runner, bench) = Create(store: null);
         bench.NetworkAnalyser.DeviceUnderTest = Preselector137.DetunedBoard();
-        var plan = PlanFile.Load(RepositoryFiles.Example("plans/psf-137-check.yaml"));
+        var plan = VirtualRuns.CheckPlan();
 
-        var outcome = await runner.RunAsync(plan, Context("PSF-24-0002"), null, CancellationToken.None).WaitAsync(Limit);
+        var outcome = await runner.RunAsync(plan, Context("PSF-24-0002"), null, CancellationToken.None).WaitAsync(VirtualRuns.Limit);
 
         Assert.Equal(RunStatus.Failed, outcome.Status);
         Assert.Contains(outcome.Checks, c => !c.Passed && c.Name.StartsWith("mask psf-137-passband", StringComparison.Ordinal));
@@ -85,7 +72,7 @@ public sealed class PlanRunnerTests
                   output: on
             """, "overdrive.yaml", RepositoryFiles.PathOf("docs/examples/plans"));
 
-        var outcome = await runner.RunAsync(plan, Context("PSF-24-0003"), null, CancellationToken.None).WaitAsync(Limit);
+        var outcome = await runner.RunAsync(plan, Context("PSF-24-0003"), null, CancellationToken.None).WaitAsync(VirtualRuns.Limit);
 
         Assert.Equal(RunStatus.Error, outcome.Status);
         Assert.Contains("gen level 5 dBm through gen -> sa (-1 dB) reaches 4 dBm at sa, above its declared maximum input of 0 dBm", outcome.Error);
@@ -100,11 +87,11 @@ public sealed class PlanRunnerTests
         using var dir = new TempDirectory();
         using var store = ResultStore.Open(dir.PathOf("runs.db"));
         var (runner, _) = Create(store);
-        var plan = PlanFile.Load(RepositoryFiles.Example("plans/psf-137-check.yaml"));
+        var plan = VirtualRuns.CheckPlan();
         using var cts = new CancellationTokenSource();
         await cts.CancelAsync();
 
-        var outcome = await runner.RunAsync(plan, Context("PSF-24-0001"), null, cts.Token).WaitAsync(Limit);
+        var outcome = await runner.RunAsync(plan, Context("PSF-24-0001"), null, cts.Token).WaitAsync(VirtualRuns.Limit);
 
         Assert.Equal(RunStatus.Stopped, outcome.Status);
         var run = store.GetRun(outcome.RunId!.Value)!;
@@ -182,7 +169,7 @@ public sealed class PlanRunnerTests
                     - sweep: { role: vna, traces: { S21: passband } }
             """, "repeat.yaml", dir.Path);
 
-        var outcome = await runner.RunAsync(plan, Context("PSF-24-0001"), null, CancellationToken.None).WaitAsync(Limit);
+        var outcome = await runner.RunAsync(plan, Context("PSF-24-0001"), null, CancellationToken.None).WaitAsync(VirtualRuns.Limit);
 
         Assert.Equal(expected, outcome.Status);
         Assert.Equal(sweeps, store.GetSweeps(outcome.RunId!.Value).Count);
