@@ -106,13 +106,13 @@ public sealed class PlanRunnerTests
         using var dir = new TempDirectory();
         using var store = ResultStore.Open(dir.PathOf("runs.db"));
         var (runner, _) = Create(store);
-        var plan = PlanFile.Load(RepositoryFiles.Example("plans/psf-137-check.yaml"));
+        var plan = VirtualRuns.CheckPlan();
         using var cts = new CancellationTokenSource();
         await cts.CancelAsync();
         var asked = 0;
         var context = Context("PSF-24-0001") with { StopReason = () => { asked++; return "stopped: the time limit of 600 s was reached"; } };
 
-        var outcome = await runner.RunAsync(plan, context, null, cts.Token).WaitAsync(Limit);
+        var outcome = await runner.RunAsync(plan, context, null, cts.Token).WaitAsync(VirtualRuns.Limit);
 
         Assert.Equal(RunStatus.Stopped, outcome.Status);
         Assert.Equal("stopped: the time limit of 600 s was reached", store.GetRun(outcome.RunId!.Value)!.ErrorMessage);
@@ -124,10 +124,10 @@ public sealed class PlanRunnerTests
     public async Task Run_CompletedWithAStopReason_NeverAsksForIt()
     {
         var (runner, _) = Create(store: null);
-        var plan = PlanFile.Load(RepositoryFiles.Example("plans/psf-137-check.yaml"));
+        var plan = VirtualRuns.CheckPlan();
         var context = Context("PSF-24-0001") with { StopReason = () => throw new InvalidOperationException("asked without a stop") };
 
-        var outcome = await runner.RunAsync(plan, context, null, CancellationToken.None).WaitAsync(Limit);
+        var outcome = await runner.RunAsync(plan, context, null, CancellationToken.None).WaitAsync(VirtualRuns.Limit);
 
         Assert.NotEqual(RunStatus.Stopped, outcome.Status);
         Assert.Null(outcome.Error);
@@ -139,11 +139,11 @@ public sealed class PlanRunnerTests
     public async Task Run_CancelledWithABlankStopReason_RecordsTheOperator(string? reason)
     {
         var (runner, _) = Create(store: null);
-        var plan = PlanFile.Load(RepositoryFiles.Example("plans/psf-137-check.yaml"));
+        var plan = VirtualRuns.CheckPlan();
         using var cts = new CancellationTokenSource();
         await cts.CancelAsync();
 
-        var outcome = await runner.RunAsync(plan, Context("PSF-24-0001") with { StopReason = () => reason }, null, cts.Token).WaitAsync(Limit);
+        var outcome = await runner.RunAsync(plan, Context("PSF-24-0001") with { StopReason = () => reason }, null, cts.Token).WaitAsync(VirtualRuns.Limit);
 
         Assert.Equal(PlanRunner.StoppedByOperator, outcome.Error);
     }
