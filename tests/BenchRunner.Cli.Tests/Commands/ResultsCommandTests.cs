@@ -76,6 +76,34 @@ public sealed class ResultsCommandTests
     }
 
     [Fact]
+    public void Results_Last_ShowsTheNewestRunOrTheNewestOfTheBoardGiven()
+    {
+        using var dir = new TempDirectory();
+        var db = MakeDatabase(dir);
+
+        using var newest = JsonDocument.Parse(CliRun.Of("results", "--db", db, "--last", "--json").Out);
+        using var ofBoard = JsonDocument.Parse(CliRun.Of("results", "--db", db, "--last", "--dut", "PSF-24-0001", "--json").Out);
+
+        Assert.Equal(2, newest.RootElement.GetProperty("id").GetInt64());
+        Assert.Equal(1, ofBoard.RootElement.GetProperty("id").GetInt64());
+    }
+
+    [Fact]
+    public void Results_LastWithRunOrWithNoMatch_IsBadInput()
+    {
+        using var dir = new TempDirectory();
+        var db = MakeDatabase(dir);
+
+        var both = CliRun.Of("results", "--db", db, "--last", "--run", "1");
+        var none = CliRun.Of("results", "--db", db, "--last", "--dut", "PSF-24-0099");
+
+        Assert.Equal(2, both.ExitCode);
+        Assert.Contains("not both", both.Error);
+        Assert.Equal(2, none.ExitCode);
+        Assert.Contains("no run of that board or lot", none.Error);
+    }
+
+    [Fact]
     public void Results_MissingDatabase_IsBadInputAndCreatesNothing()
     {
         using var dir = new TempDirectory();
