@@ -78,13 +78,15 @@ public static class ResultsTextView
             var shown = SweepFigures.Where(key => figures.Any(f => f.Figure.Key == key && f.Figure.Value is not null)).ToList();
             writer.WriteLine();
             writer.WriteLine($"  Sweeps ({sweeps.Count})");
-            writer.WriteLine("    " + string.Join("  ", new[] { $"{"#",4}", $"{"acquired",-12}", $"{"trace",-10}" }.Concat(shown.Select(k => $"{k,16}"))));
+            // The trace column is as wide as the longest trace name (at least "trace"), so names such as spectrum-raised stay aligned.
+            int traceWidth = sweeps.Select(TraceName).Append("trace").Max(n => n.Length);
+            writer.WriteLine("    " + string.Join("  ", new[] { $"{"#",4}", $"{"acquired",-12}", "trace".PadRight(traceWidth) }.Concat(shown.Select(k => $"{k,16}"))));
             foreach (var s in sweeps)
             {
                 var values = bySweep[s.Id].ToDictionary(f => f.Figure.Key, f => f.Figure);
                 var cells = shown.Select(key => values.TryGetValue(key, out var f) && f.Value is { } v ? Display.Value(v, f.Unit) : "-");
                 var acquired = s.Record.AcquiredUtc is { } t ? t.UtcDateTime.ToString("HH:mm:ss.fff", CultureInfo.InvariantCulture) : "-";
-                writer.WriteLine("    " + string.Join("  ", new[] { $"{s.Sequence,4}", $"{acquired,-12}", $"{s.Record.TraceName ?? s.Record.Trace.Quantity.ToString(),-10}" }.Concat(cells.Select(c => $"{c,16}"))));
+                writer.WriteLine("    " + string.Join("  ", new[] { $"{s.Sequence,4}", $"{acquired,-12}", TraceName(s).PadRight(traceWidth) }.Concat(cells.Select(c => $"{c,16}"))));
             }
 
             foreach (var s in sweeps.Where(s => s.Record.Flags != SweepFlags.None || s.Record.Compensation is not (null or "no path compensation")))
@@ -108,4 +110,6 @@ public static class ResultsTextView
     private static string Time(DateTimeOffset time) => time.UtcDateTime.ToString("yyyy-MM-dd HH:mm:ss", CultureInfo.InvariantCulture);
 
     private static string Status(RunStatus status) => status == RunStatus.Failed ? "FAILED" : status.ToString().ToLowerInvariant();
+
+    private static string TraceName(StoredSweep sweep) => sweep.Record.TraceName ?? sweep.Record.Trace.Quantity.ToString();
 }

@@ -104,6 +104,36 @@ public sealed class ResultsCommandTests
     }
 
     [Fact]
+    public void Results_OneRun_KeepsTheSweepTableAlignedWithALongTraceName()
+    {
+        using var dir = new TempDirectory();
+        var db = dir.PathOf("long.db");
+        var s21 = TraceFile.Read(RepositoryFiles.Example("psf-24-0001.s2p")).Find(TraceQuantity.S21)!;
+        using (var store = ResultStore.Open(db))
+        {
+            var id = store.StartRun(new RunRecord(RunMode.Single, "p", "plan: p\n", "0.1.0", "bench-1"));
+            store.AddSweep(id, new SweepRecord("sweep", s21) { TraceName = "s21", Figures = FigureSummary.ForFilter(s21) });
+            store.AddSweep(id, new SweepRecord("sweep", s21) { TraceName = "passband-after-rework", Figures = FigureSummary.ForFilter(s21) });
+            store.FinishRun(id, RunStatus.Passed);
+        }
+
+        var lines = CliRun.Of("results", "--db", db, "--run", "1").Out.Split('\n');
+
+        // The first figure column starts at the same place in both rows, whatever the trace name's length.
+        var rows = lines.Where(l => l.Contains(" s21 ", StringComparison.Ordinal) || l.Contains("passband-after-rework", StringComparison.Ordinal)).ToList();
+        Assert.Equal(2, rows.Count);
+        static int AfterName(string row, string name)
+        {
+            int i = row.IndexOf(name, StringComparison.Ordinal) + name.Length;
+            while (i < row.Length && row[i] == ' ') i++;
+            return i;
+        }
+
+        Assert.Equal(AfterName(rows[0], " s21"), AfterName(rows[1], "passband-after-rework"));
+        Assert.True(AfterName(rows[1], "passband-after-rework") < rows[1].Length, "the row holds figures after the trace name");
+    }
+
+    [Fact]
     public void Results_MissingDatabase_IsBadInputAndCreatesNothing()
     {
         using var dir = new TempDirectory();
