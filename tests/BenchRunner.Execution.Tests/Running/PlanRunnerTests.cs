@@ -18,6 +18,15 @@ public sealed class PlanRunnerTests
 
     private static RunContext Context(string serial) => new("plan text", null, "0.1.0", "test-host") { DutSerial = serial, Lot = "PSF-24-L07" };
 
+    /// <summary>Runs the example check plan with a token cancelled before it starts.</summary>
+    private static async Task<RunOutcome> RunCancelledAsync(ResultStore? store, RunContext context)
+    {
+        var (runner, _) = Create(store);
+        using var cts = new CancellationTokenSource();
+        await cts.CancelAsync();
+        return await runner.RunAsync(VirtualRuns.CheckPlan(), context, null, cts.Token).WaitAsync(VirtualRuns.Limit);
+    }
+
     [Fact]
     public async Task Run_TunedBoard_PassesAndCommitsEverySweepAndCheck()
     {
@@ -86,12 +95,8 @@ public sealed class PlanRunnerTests
     {
         using var dir = new TempDirectory();
         using var store = ResultStore.Open(dir.PathOf("runs.db"));
-        var (runner, _) = Create(store);
-        var plan = VirtualRuns.CheckPlan();
-        using var cts = new CancellationTokenSource();
-        await cts.CancelAsync();
 
-        var outcome = await runner.RunAsync(plan, Context("PSF-24-0001"), null, cts.Token).WaitAsync(VirtualRuns.Limit);
+        var outcome = await RunCancelledAsync(store, Context("PSF-24-0001"));
 
         Assert.Equal(RunStatus.Stopped, outcome.Status);
         var run = store.GetRun(outcome.RunId!.Value)!;
@@ -105,14 +110,10 @@ public sealed class PlanRunnerTests
     {
         using var dir = new TempDirectory();
         using var store = ResultStore.Open(dir.PathOf("runs.db"));
-        var (runner, _) = Create(store);
-        var plan = VirtualRuns.CheckPlan();
-        using var cts = new CancellationTokenSource();
-        await cts.CancelAsync();
         var asked = 0;
         var context = Context("PSF-24-0001") with { StopReason = () => { asked++; return "stopped: the time limit of 600 s was reached"; } };
 
-        var outcome = await runner.RunAsync(plan, context, null, cts.Token).WaitAsync(VirtualRuns.Limit);
+        var outcome = await RunCancelledAsync(store, context);
 
         Assert.Equal(RunStatus.Stopped, outcome.Status);
         Assert.Equal("stopped: the time limit of 600 s was reached", store.GetRun(outcome.RunId!.Value)!.ErrorMessage);
@@ -138,12 +139,7 @@ public sealed class PlanRunnerTests
     [InlineData("  ")]
     public async Task Run_CancelledWithABlankStopReason_RecordsTheOperator(string? reason)
     {
-        var (runner, _) = Create(store: null);
-        var plan = VirtualRuns.CheckPlan();
-        using var cts = new CancellationTokenSource();
-        await cts.CancelAsync();
-
-        var outcome = await runner.RunAsync(plan, Context("PSF-24-0001") with { StopReason = () => reason }, null, cts.Token).WaitAsync(VirtualRuns.Limit);
+        var outcome = await RunCancelledAsync(store: null, Context("PSF-24-0001") with { StopReason = () => reason });
 
         Assert.Equal(PlanRunner.StoppedByOperator, outcome.Error);
     }
