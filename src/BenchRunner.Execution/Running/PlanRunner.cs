@@ -194,7 +194,7 @@ public sealed partial class PlanRunner
                 case FigureCheck figures:
                     foreach (var limit in figures.Limits)
                     {
-                        state.Record(_store, CheckFigure(figures.Trace, limit, name, state), state.SweepIdOf(figures.Trace), trace: figures.Trace);
+                        state.Record(_store, CheckJudge.Figure(figures.Trace, limit, name, state.Traces[figures.Trace].Figures), state.SweepIdOf(figures.Trace), trace: figures.Trace);
                     }
 
                     break;
@@ -222,7 +222,7 @@ public sealed partial class PlanRunner
         for (int pass = 1; pass <= limit; pass++)
         {
             await RunStepsAsync(repeat.Steps, state, cancellationToken).ConfigureAwait(false);
-            if (repeat.Until is { } until && until.Limits.All(l => CheckFigure(until.Trace, l, name, state).Passed))
+            if (repeat.Until is { } until && until.Limits.All(l => CheckJudge.Figure(until.Trace, l, name, state.Traces[until.Trace].Figures).Passed))
             {
                 return;
             }
@@ -316,50 +316,9 @@ public sealed partial class PlanRunner
     private void CheckMask(MaskCheck step, string name, RunState state)
     {
         var (trace, _) = state.Traces[step.Trace];
-        var evaluation = step.Mask.Evaluate(trace);
-        var worst = evaluation.WorstMarginDb is { } w && evaluation.WorstMarginAt is { } at
-            ? $"worst margin {w.ToString("+0.00;-0.00", CultureInfo.InvariantCulture)} dB at {at}"
-            : "no point under the mask";
-        var spans = evaluation.FailingSpans.Count == 0 ? "" : $"; fails {string.Join(", ", evaluation.FailingSpans.Select(s => $"{s.Start} to {s.Stop}"))}";
-        var result = new CheckResult(name, $"mask {step.Mask.Name} on {step.Trace}", evaluation.Passed, worst + spans, evaluation.WorstMarginDb, "dB");
-        state.Record(_store, result, state.SweepIdOf(step.Trace), evaluation.WorstMarginAt, CheckKind.Mask, step.Trace);
+        var (result, worstAt) = CheckJudge.Mask(step, name, trace);
+        state.Record(_store, result, state.SweepIdOf(step.Trace), worstAt, CheckKind.Mask, step.Trace);
     }
-
-    private static CheckResult CheckFigure(string traceName, FigureLimit limit, string step, RunState state)
-    {
-        var (_, figures) = state.Traces[traceName];
-        var figure = figures.FirstOrDefault(f => f.Key == limit.Key);
-        var what = $"{limit.Key} of {traceName}";
-        var wanted = Describe(limit);
-        if (figure?.Value is not { } value)
-        {
-            return new CheckResult(step, what, false, $"not available ({figure?.Reason ?? "not computed"}); wanted {wanted}", null, limit.Unit);
-        }
-
-        var margins = new List<double>();
-        if (limit.Min is { } lo) margins.Add(value - lo);
-        if (limit.Max is { } hi) margins.Add(hi - value);
-        return new CheckResult(step, what, limit.Passes(value), $"{Format(value, limit.Unit)}; wanted {wanted}",
-            margins.Count == 0 ? null : margins.Min(), limit.Unit);
-    }
-
-    private static string Describe(FigureLimit limit) => (limit.Min, limit.Max, limit.Target) switch
-    {
-        ({ } lo, { } hi, { } t) => $"{Format(t, limit.Unit)} ± {Format((hi - lo) / 2, limit.Unit)}",
-        ({ } lo, { } hi, null) => $"{Format(lo, limit.Unit)} to {Format(hi, limit.Unit)}",
-        ({ } lo, null, _) => $"at least {Format(lo, limit.Unit)}",
-        (null, { } hi, _) => $"at most {Format(hi, limit.Unit)}",
-        _ => "any value",
-    };
-
-    private static string Format(double value, string unit) => unit switch
-    {
-        "Hz" => Math.Abs(value) >= 1e6 ? $"{(value / 1e6).ToString("0.####", CultureInfo.InvariantCulture)} MHz"
-            : Math.Abs(value) >= 1e3 ? $"{(value / 1e3).ToString("0.###", CultureInfo.InvariantCulture)} kHz"
-            : $"{value.ToString("0.#", CultureInfo.InvariantCulture)} Hz",
-        "" => value.ToString("0.###", CultureInfo.InvariantCulture),
-        _ => $"{value.ToString("0.###", CultureInfo.InvariantCulture)} {unit}",
-    };
 
     private static T Capability<T>(RunState state, string role) where T : class =>
         state.Instruments[role].GetCapability<T>()
