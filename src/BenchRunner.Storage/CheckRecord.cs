@@ -2,7 +2,7 @@ using BenchRunner.Core.Quantities;
 
 namespace BenchRunner.Storage;
 
-/// <summary>The outcome of one check; given to <see cref="ResultStore.AddCheck"/>. Numbers must be finite.</summary>
+/// <summary>The outcome of one check; given to <see cref="IResultWriter.AddCheckAsync"/>. Numbers must be finite.</summary>
 /// <param name="Name">The check's name in the plan.</param>
 /// <param name="Kind">Mask, figure limit or overload check.</param>
 /// <param name="Passed">Whether it passed.</param>

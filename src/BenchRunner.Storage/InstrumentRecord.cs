@@ -1,7 +1,7 @@
 namespace BenchRunner.Storage;
 
 /// <summary>
-/// An instrument used by a run, as it identified itself; given to <see cref="ResultStore.AddInstrument"/>.
+/// An instrument used by a run, as it identified itself; given to <see cref="IResultWriter.AddInstrumentAsync"/>.
 /// The store keeps the text as given and knows nothing of instrument protocols.
 /// </summary>
 /// <param name="Role">The name the plan gives the instrument (e.g. <c>vna</c>); one per role in a run.</param>

@@ -1,6 +1,6 @@
 namespace BenchRunner.Storage;
 
-/// <summary>Which runs <see cref="ResultStore.ListRuns"/> returns; every condition given must hold. The default matches all runs.</summary>
+/// <summary>Which runs <see cref="IResultReader.ListRunsAsync"/> returns; every condition given must hold. The default matches all runs.</summary>
 public sealed record RunFilter
 {
     /// <summary>Only runs of this device serial (exact match).</summary>

@@ -1,7 +1,7 @@
 namespace BenchRunner.Storage;
 
 /// <summary>
-/// What is known of a run when it starts; given to <see cref="ResultStore.StartRun"/>. Optional
+/// What is known of a run when it starts; given to <see cref="IResultWriter.StartRunAsync"/>. Optional
 /// text is null when absent (blank text is refused).
 /// </summary>
 /// <param name="Mode">Single run, tuning session or batch board.</param>

@@ -3,7 +3,7 @@ using BenchRunner.Core.Traces;
 
 namespace BenchRunner.Storage;
 
-/// <summary>One acquired trace with what belongs to it; given to <see cref="ResultStore.AddSweep"/>.</summary>
+/// <summary>One acquired trace with what belongs to it; given to <see cref="IResultWriter.AddSweepAsync"/>.</summary>
 /// <param name="StepName">The plan step that took it.</param>
 /// <param name="Trace">The trace: complex S-parameter samples or power levels, kept exactly.</param>
 public sealed record SweepRecord(string StepName, Trace Trace)

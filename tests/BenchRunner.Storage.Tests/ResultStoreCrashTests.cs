@@ -1,3 +1,4 @@
+using BenchRunner.Storage.Sqlite;
 using BenchRunner.Core.Traces;
 using BenchRunner.Storage.Tests.Support;
 
@@ -23,13 +24,13 @@ public sealed class ResultStoreCrashTests : IDisposable
         store.Dispose();
         _clock.Advance(TimeSpan.FromMinutes(10));
 
-        using var reopened = ResultStore.Open(path, _clock);
+        using var reopened = SqliteResultStore.Open(path, _clock);
 
         Assert.Equal([runId], reopened.InterruptedAtOpen);
         var run = reopened.GetRun(runId)!;
         Assert.Equal(RunStatus.Interrupted, run.Status);
         Assert.Equal(_clock.GetUtcNow(), run.EndedUtc);
-        Assert.Equal(ResultStore.InterruptedMessage, run.ErrorMessage);
+        Assert.Equal(SqliteResultStore.InterruptedMessage, run.ErrorMessage);
         AssertSweeps(traces, reopened.GetSweeps(runId));
         Assert.Equal("ok", StoreFile.Scalar(path, "PRAGMA integrity_check"));
     }
@@ -46,7 +47,7 @@ public sealed class ResultStoreCrashTests : IDisposable
             Assert.True(new FileInfo(crashed + "-wal").Length > 0, "the committed sweeps are still in the WAL");
             store.AddSweep(runId, new SweepRecord("after the copy", Samples.Spectrum()));
 
-            using var recovered = ResultStore.Open(crashed, _clock);
+            using var recovered = SqliteResultStore.Open(crashed, _clock);
 
             Assert.Equal([runId], recovered.InterruptedAtOpen);
             Assert.Equal(RunStatus.Interrupted, recovered.GetRun(runId)!.Status);
@@ -71,7 +72,7 @@ public sealed class ResultStoreCrashTests : IDisposable
                 wal.Write(garbage);
             }
 
-            using var recovered = ResultStore.Open(crashed, _clock);
+            using var recovered = SqliteResultStore.Open(crashed, _clock);
 
             Assert.Equal([runId], recovered.InterruptedAtOpen);
             AssertSweeps(traces, recovered.GetSweeps(runId));
@@ -83,10 +84,10 @@ public sealed class ResultStoreCrashTests : IDisposable
     public void Open_WhileAnotherStoreHasTheFileOpen_LeavesItsRunningRunAlone()
     {
         var path = _dir.PathOf("results.db");
-        using var daemon = ResultStore.Open(path, _clock);
+        using var daemon = SqliteResultStore.Open(path, _clock);
         var runId = daemon.StartRun(Samples.Run());
 
-        using (var query = ResultStore.Open(path, _clock))
+        using (var query = SqliteResultStore.Open(path, _clock))
         {
             Assert.Empty(query.InterruptedAtOpen);
             Assert.Equal(RunStatus.Running, query.GetRun(runId)!.Status);
@@ -101,18 +102,18 @@ public sealed class ResultStoreCrashTests : IDisposable
     public void Open_AfterTheOtherStoreClosed_MarksItsLeftoverRunInterrupted()
     {
         var path = _dir.PathOf("results.db");
-        var first = ResultStore.Open(path, _clock);
+        var first = SqliteResultStore.Open(path, _clock);
         var runId = first.StartRun(Samples.Run());
-        using var second = ResultStore.Open(path, _clock);
+        using var second = SqliteResultStore.Open(path, _clock);
         first.Dispose();
 
-        using var third = ResultStore.Open(path, _clock);
+        using var third = SqliteResultStore.Open(path, _clock);
 
         Assert.Empty(third.InterruptedAtOpen);
         Assert.Equal(RunStatus.Running, third.GetRun(runId)!.Status);
         second.Dispose();
         third.Dispose();
-        using var last = ResultStore.Open(path, _clock);
+        using var last = SqliteResultStore.Open(path, _clock);
         Assert.Equal([runId], last.InterruptedAtOpen);
     }
 
@@ -120,8 +121,8 @@ public sealed class ResultStoreCrashTests : IDisposable
     public void Open_TwoStoresWritingInTurn_BothCommit()
     {
         var path = _dir.PathOf("results.db");
-        using var a = ResultStore.Open(path, _clock);
-        using var b = ResultStore.Open(path, _clock);
+        using var a = SqliteResultStore.Open(path, _clock);
+        using var b = SqliteResultStore.Open(path, _clock);
         var runA = a.StartRun(Samples.Run("PSF-24-0001"));
         var runB = b.StartRun(Samples.Run("PSF-24-0002"));
         for (int i = 0; i < 3; i++)
@@ -134,9 +135,9 @@ public sealed class ResultStoreCrashTests : IDisposable
         Assert.Equal([1, 2, 3], a.GetSweeps(runB).Select(s => s.Sequence));
     }
 
-    private (long RunId, List<Trace> Traces) StartRunWithSweeps(string path, int count, out ResultStore store)
+    private (long RunId, List<Trace> Traces) StartRunWithSweeps(string path, int count, out SqliteResultStore store)
     {
-        store = ResultStore.Open(path, _clock);
+        store = SqliteResultStore.Open(path, _clock);
         var runId = store.StartRun(Samples.Run());
         var traces = new List<Trace>();
         for (int i = 0; i < count; i++)

@@ -1,3 +1,4 @@
+using BenchRunner.Storage.Sqlite;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Storage.Tests.Support;
 using Microsoft.Data.Sqlite;
@@ -8,9 +9,9 @@ public sealed class ResultStoreRunTests : IDisposable
 {
     private readonly TempDirectory _dir = new();
     private readonly ManualTimeProvider _clock = new();
-    private readonly ResultStore _store;
+    private readonly SqliteResultStore _store;
 
-    public ResultStoreRunTests() => _store = ResultStore.Open(_dir.PathOf("results.db"), _clock);
+    public ResultStoreRunTests() => _store = SqliteResultStore.Open(_dir.PathOf("results.db"), _clock);
 
     public void Dispose()
     {
@@ -71,7 +72,7 @@ public sealed class ResultStoreRunTests : IDisposable
     [Fact]
     public void Timestamps_InTheFile_AreUtcEndingInZ()
     {
-        var store = ResultStore.Open(_dir.PathOf("offset.db"), new ManualTimeProvider(new DateTimeOffset(2025, 6, 1, 23, 59, 59, 999, TimeSpan.FromHours(-5))));
+        var store = SqliteResultStore.Open(_dir.PathOf("offset.db"), new ManualTimeProvider(new DateTimeOffset(2025, 6, 1, 23, 59, 59, 999, TimeSpan.FromHours(-5))));
         using (store)
         {
             var runId = store.StartRun(Samples.Run());

@@ -1,3 +1,4 @@
+using BenchRunner.Storage.Sqlite;
 using System.Numerics;
 using BenchRunner.Core.Figures;
 using BenchRunner.Core.Quantities;
@@ -10,9 +11,9 @@ public sealed class ResultStoreSweepTests : IDisposable
 {
     private readonly TempDirectory _dir = new();
     private readonly ManualTimeProvider _clock = new();
-    private readonly ResultStore _store;
+    private readonly SqliteResultStore _store;
 
-    public ResultStoreSweepTests() => _store = ResultStore.Open(_dir.PathOf("results.db"), _clock);
+    public ResultStoreSweepTests() => _store = SqliteResultStore.Open(_dir.PathOf("results.db"), _clock);
 
     public void Dispose()
     {

@@ -1,3 +1,4 @@
+using BenchRunner.Storage.Sqlite;
 using System.Text.Json;
 using BenchRunner.Core.Figures;
 using BenchRunner.Storage.Tests.Support;
@@ -8,9 +9,9 @@ public sealed class ResultStoreViewTests : IDisposable
 {
     private readonly TempDirectory _dir = new();
     private readonly ManualTimeProvider _clock = new();
-    private readonly ResultStore _store;
+    private readonly SqliteResultStore _store;
 
-    public ResultStoreViewTests() => _store = ResultStore.Open(_dir.PathOf("results.db"), _clock);
+    public ResultStoreViewTests() => _store = SqliteResultStore.Open(_dir.PathOf("results.db"), _clock);
 
     public void Dispose()
     {

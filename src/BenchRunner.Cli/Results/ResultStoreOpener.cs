@@ -1,4 +1,5 @@
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Cli.Results;
 
@@ -7,11 +8,11 @@ public static class ResultStoreOpener
 {
     /// <summary>Opens (or creates) the store at <paramref name="path"/>.</summary>
     /// <exception cref="UsageException">Not a result database, a newer schema, or a missing folder.</exception>
-    public static ResultStore Open(string path)
+    public static SqliteResultStore Open(string path)
     {
         try
         {
-            return ResultStore.Open(path);
+            return SqliteResultStore.Open(path);
         }
         catch (ResultStoreException ex)
         {

@@ -13,6 +13,7 @@ using BenchRunner.Execution.Validation;
 using BenchRunner.Instruments.Adapters;
 using BenchRunner.Instruments.Connections;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 using Microsoft.Extensions.Logging;
 
 namespace BenchRunner.Daemon.Hosting;
@@ -41,7 +42,7 @@ public sealed partial class BenchDaemon
     private readonly ConcurrentDictionary<string, Task> _jobs = new(StringComparer.Ordinal);
     private readonly ConcurrentDictionary<string, (StopGate Gate, RunLogObserver Observer, PlanJob Job)> _running = new(StringComparer.Ordinal);
     private readonly string _softwareVersion;
-    private ResultStore? _store;
+    private SqliteResultStore? _store;
     private int _nextJob;
 
     /// <summary>Creates the daemon.</summary>
@@ -101,7 +102,7 @@ public sealed partial class BenchDaemon
     {
         DaemonLog.Starting(_log, _bench.Name, _settings.BenchPath, _settings.InboxFolder, _settings.DatabasePath, _settings.Schedules.Count);
         DaemonLog.SafetyCaution(_log, PlanRunner.InputCaution);
-        using var store = ResultStore.Open(_settings.DatabasePath, _time);
+        using var store = SqliteResultStore.Open(_settings.DatabasePath, _time);
         _store = store;
         if (store.InterruptedAtOpen.Count > 0)
         {

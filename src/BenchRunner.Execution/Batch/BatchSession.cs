@@ -1,6 +1,7 @@
 using BenchRunner.Execution.Plans;
 using BenchRunner.Execution.Running;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Execution.Batch;
 
@@ -15,7 +16,7 @@ public sealed class BatchSession
     private readonly PlanRunner _runner;
     private readonly TestPlan _plan;
     private readonly RunContext _context;
-    private readonly ResultStore _store;
+    private readonly SqliteResultStore _store;
     private readonly IBoardFixture _fixture;
 
     /// <summary>Creates a session.</summary>
@@ -25,7 +26,7 @@ public sealed class BatchSession
     /// <param name="store">The result file: it holds the lot's history, which decides what is a retest.</param>
     /// <param name="fixture">Puts each board in place.</param>
     /// <exception cref="ArgumentException">A context without a lot.</exception>
-    public BatchSession(PlanRunner runner, TestPlan plan, RunContext context, ResultStore store, IBoardFixture fixture)
+    public BatchSession(PlanRunner runner, TestPlan plan, RunContext context, SqliteResultStore store, IBoardFixture fixture)
     {
         _runner = runner ?? throw new ArgumentNullException(nameof(runner));
         _plan = plan ?? throw new ArgumentNullException(nameof(plan));

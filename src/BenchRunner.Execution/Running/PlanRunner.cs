@@ -12,6 +12,7 @@ using BenchRunner.Instruments.Errors;
 using BenchRunner.Instruments.Profiles;
 using BenchRunner.Instruments.Resilience;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Execution.Running;
 
@@ -33,7 +34,7 @@ public sealed partial class PlanRunner
 
     private readonly BenchDefinition _bench;
     private readonly TransportFactory _transports;
-    private readonly ResultStore? _store;
+    private readonly SqliteResultStore? _store;
     private readonly TimeProvider _time;
     private readonly InstrumentResilienceOptions _resilience;
 
@@ -43,7 +44,7 @@ public sealed partial class PlanRunner
     /// <param name="store">Where runs are recorded, or null to record nothing.</param>
     /// <param name="time">The clock for waits, timeouts and timestamps.</param>
     /// <param name="resilience">Timeouts, retries and breaker; defaults when null.</param>
-    public PlanRunner(BenchDefinition bench, TransportFactory transports, ResultStore? store = null,
+    public PlanRunner(BenchDefinition bench, TransportFactory transports, SqliteResultStore? store = null,
         TimeProvider? time = null, InstrumentResilienceOptions? resilience = null)
     {
         _bench = bench ?? throw new ArgumentNullException(nameof(bench));

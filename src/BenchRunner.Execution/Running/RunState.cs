@@ -4,6 +4,7 @@ using BenchRunner.Core.Traces;
 using BenchRunner.Instruments.Capabilities;
 using BenchRunner.Instruments.Resilience;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Execution.Running;
 
@@ -30,7 +31,7 @@ internal sealed class RunState(IRunObserver observer, TimeProvider time)
 
     public void Emit(Func<DateTimeOffset, RunEvent> create) => observer.OnEvent(create(time.GetUtcNow()));
 
-    public void Record(ResultStore? store, CheckResult result, long? sweepId, Frequency? worstAt = null, CheckKind kind = CheckKind.FigureLimit,
+    public void Record(SqliteResultStore? store, CheckResult result, long? sweepId, Frequency? worstAt = null, CheckKind kind = CheckKind.FigureLimit,
         string? trace = null, string? detailJson = null)
     {
         if (trace is not null && OverloadedTraces.Contains(trace))

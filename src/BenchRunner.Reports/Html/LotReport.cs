@@ -4,6 +4,7 @@ using BenchRunner.Reports.Formatting;
 using BenchRunner.Reports.Lots;
 using BenchRunner.Reports.Svg;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 using static BenchRunner.Reports.Html.Html;
 
 namespace BenchRunner.Reports.Html;
@@ -18,7 +19,7 @@ public static class LotReport
     /// <summary>Builds the report of lot <paramref name="lot"/>.</summary>
     /// <exception cref="ArgumentException">The store holds no run of that lot.</exception>
     /// <exception cref="ResultStoreException">The file cannot be read.</exception>
-    public static XDocument Create(ResultStore store, string lot, DateTimeOffset generatedUtc, string softwareVersion)
+    public static XDocument Create(SqliteResultStore store, string lot, DateTimeOffset generatedUtc, string softwareVersion)
     {
         ArgumentNullException.ThrowIfNull(store);
         var summary = LotSummary.Read(store, lot);

@@ -5,6 +5,7 @@ using BenchRunner.Execution.LimitRecords;
 using BenchRunner.Reports.Formatting;
 using BenchRunner.Reports.Svg;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 using static BenchRunner.Reports.Html.Html;
 
 namespace BenchRunner.Reports.Html;
@@ -19,7 +20,7 @@ public static class RunReport
     /// <summary>Builds the report of run <paramref name="runId"/>.</summary>
     /// <exception cref="ArgumentException">The store has no such run.</exception>
     /// <exception cref="ResultStoreException">The file cannot be read.</exception>
-    public static XDocument Create(ResultStore store, long runId, DateTimeOffset generatedUtc, string softwareVersion)
+    public static XDocument Create(SqliteResultStore store, long runId, DateTimeOffset generatedUtc, string softwareVersion)
     {
         ArgumentNullException.ThrowIfNull(store);
         var run = store.GetRun(runId) ?? throw new ArgumentException($"{store.Path} has no run {runId}.", nameof(runId));
@@ -34,7 +35,7 @@ public static class RunReport
     }
 
     /// <summary>The sections of one run's report (also used per board in a lot report); element ids start with <paramref name="idPrefix"/>.</summary>
-    internal static IEnumerable<XElement> Sections(ResultStore store, StoredRun run, string idPrefix, bool brief = false)
+    internal static IEnumerable<XElement> Sections(SqliteResultStore store, StoredRun run, string idPrefix, bool brief = false)
     {
         var limits = PlanLimits.FromRunJson(run.Record.ExtraJson);
         var sweeps = store.GetSweeps(run.Id);

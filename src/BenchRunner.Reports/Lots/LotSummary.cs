@@ -1,6 +1,7 @@
 using BenchRunner.Core.Statistics;
 using BenchRunner.Execution.LimitRecords;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Reports.Lots;
 
@@ -46,7 +47,7 @@ public sealed class LotSummary
     /// <param name="lot">The lot's name.</param>
     /// <param name="withFigures">False to skip the figure spreads (which read every board's sweeps), e.g. for a progress line.</param>
     /// <exception cref="ResultStoreException">The file cannot be read.</exception>
-    public static LotSummary Read(ResultStore store, string lot, bool withFigures = true)
+    public static LotSummary Read(SqliteResultStore store, string lot, bool withFigures = true)
     {
         ArgumentNullException.ThrowIfNull(store);
         ArgumentException.ThrowIfNullOrWhiteSpace(lot);
@@ -77,7 +78,7 @@ public sealed class LotSummary
         return new LotSummary(lot, boards, untested, yield, withFigures ? Spreads(store, boards) : [], runs);
     }
 
-    private static List<FigureSpread> Spreads(ResultStore store, IReadOnlyList<LotBoard> boards)
+    private static List<FigureSpread> Spreads(SqliteResultStore store, IReadOnlyList<LotBoard> boards)
     {
         // The limits of the newest counting run decide which figures are summarised.
         var newest = boards.Select(b => b.Latest).OrderBy(r => r.StartedUtc).ThenBy(r => r.Id).LastOrDefault();

@@ -3,6 +3,7 @@ using BenchRunner.Cli.Tests.Support;
 using BenchRunner.Core.TraceFiles;
 using BenchRunner.Core.Traces;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Cli.Tests.Commands;
 
@@ -23,7 +24,7 @@ public sealed class ExportCommandTests
         Assert.Equal(0, run.ExitCode);
         Assert.Contains("wrote", run.Out);
         var written = Directory.GetFiles(outDir).Select(TraceFile.Read).ToList();
-        using var store = ResultStore.Open(db);
+        using var store = SqliteResultStore.Open(db);
         foreach (var stored in store.GetSweeps(1))
         {
             var expected = (ComplexTrace)stored.Record.Trace;
@@ -55,7 +56,7 @@ public sealed class ExportCommandTests
         using var dir = new TempDirectory();
         var db = dir.PathOf("four.db");
         var example = TraceFile.Read(RepositoryFiles.Example("psf-24-0001.s2p"));
-        using (var store = ResultStore.Open(db))
+        using (var store = SqliteResultStore.Open(db))
         {
             var id = store.StartRun(new RunRecord(RunMode.Single, "psf-137-check", "name: psf-137-check\n", "0.1.0", "bench-1") { DutSerial = "PSF-24-0001" });
             foreach (var trace in example.Traces)

@@ -4,6 +4,7 @@ using BenchRunner.Cli.Tests.Support;
 using BenchRunner.Core.TraceFiles;
 using BenchRunner.Core.Traces;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Cli.Tests.Commands;
 
@@ -56,7 +57,7 @@ public sealed class ReportCommandTests
         Assert.Equal(0, run.ExitCode);
         Assert.Equal("run 2", JsonDocument.Parse(run.Out).RootElement.GetProperty("report").GetString());
         var page = XDocument.Load(file);
-        using var store = ResultStore.Open(db);
+        using var store = SqliteResultStore.Open(db);
         Assert.Contains(store.GetRun(2)!.PlanSha256, page.Root!.Value);
         // Board 0002 fails the mask: its plot shades where.
         Assert.Contains(page.Descendants(S + "rect"), r => (string?)r.Attribute("class") == "fail-span");
@@ -112,7 +113,7 @@ public sealed class ReportCommandTests
 
         Assert.Equal(0, CliRun.Of("export", "--run", "3", "--format", "csv", "-o", dir.PathOf("out"), "--db", db).ExitCode);
 
-        using var store = ResultStore.Open(db);
+        using var store = SqliteResultStore.Open(db);
         var written = Directory.GetFiles(dir.PathOf("out")).Select(TraceFile.Read).SelectMany(s => s.Traces).ToList();
         foreach (var stored in store.GetSweeps(3).Select(s => (ComplexTrace)s.Record.Trace))
         {

@@ -5,6 +5,7 @@ using BenchRunner.Core.Quantities;
 using BenchRunner.Core.TraceFiles;
 using BenchRunner.Core.Traces;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Cli.Tests.Commands;
 
@@ -14,7 +15,7 @@ public sealed class ResultsCommandTests
     {
         var path = dir.PathOf("results.db");
         var s21 = TraceFile.Read(RepositoryFiles.Example("psf-24-0001.s2p")).Find(TraceQuantity.S21)!;
-        using var store = ResultStore.Open(path);
+        using var store = SqliteResultStore.Open(path);
         var first = store.StartRun(new RunRecord(RunMode.Single, "psf-137-check", "name: psf-137-check\n", "0.1.0", "bench-1")
         {
             DutSerial = "PSF-24-0001", Lot = "PSF-24-L07", Operator = "tech",
@@ -109,7 +110,7 @@ public sealed class ResultsCommandTests
         using var dir = new TempDirectory();
         var db = dir.PathOf("long.db");
         var s21 = TraceFile.Read(RepositoryFiles.Example("psf-24-0001.s2p")).Find(TraceQuantity.S21)!;
-        using (var store = ResultStore.Open(db))
+        using (var store = SqliteResultStore.Open(db))
         {
             var id = store.StartRun(new RunRecord(RunMode.Single, "p", "plan: p\n", "0.1.0", "bench-1"));
             store.AddSweep(id, new SweepRecord("sweep", s21) { TraceName = "s21", Figures = FigureSummary.ForFilter(s21) });

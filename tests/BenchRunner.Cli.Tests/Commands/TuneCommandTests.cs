@@ -2,6 +2,7 @@ using System.Text.Json;
 using System.Text.RegularExpressions;
 using BenchRunner.Cli.Tests.Support;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Cli.Tests.Commands;
 
@@ -34,7 +35,7 @@ public sealed partial class TuneCommandTests
         // Where the first sweep falls on the virtual hand's path depends on how long connecting took
         // on the real clock; the sweep-by-sweep course is checked on a fake clock in TuningSessionTests.
 
-        using (var store = ResultStore.Open(db))
+        using (var store = SqliteResultStore.Open(db))
         {
             var stored = Assert.Single(store.ListRuns());
             Assert.Equal(RunMode.Tuning, stored.Record.Mode);

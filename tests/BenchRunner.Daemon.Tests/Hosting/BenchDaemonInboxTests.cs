@@ -2,6 +2,7 @@ using BenchRunner.Daemon.Inbox;
 using BenchRunner.Daemon.Status;
 using BenchRunner.Daemon.Tests.Support;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Daemon.Tests.Hosting;
 
@@ -27,7 +28,7 @@ public sealed class BenchDaemonInboxTests
         Assert.Contains("checks: 1 of 1 passed", summary, StringComparison.Ordinal);
 
         await rig.StopAsync();
-        using var store = ResultStore.Open(rig.Settings.DatabasePath);
+        using var store = SqliteResultStore.Open(rig.Settings.DatabasePath);
         var run = store.GetRun(finished.RunId!.Value)!;
         Assert.Equal(RunStatus.Passed, run.Status);
         Assert.Equal(2, store.GetSweeps(run.Id).Count);
@@ -108,7 +109,7 @@ public sealed class BenchDaemonInboxTests
         Assert.Empty(final.Running);
         var recent = Assert.Single(final.Recent);
         Assert.Equal("stopped", recent.Status);
-        using var store = ResultStore.Open(rig.Settings.DatabasePath);
+        using var store = SqliteResultStore.Open(rig.Settings.DatabasePath);
         Assert.Equal("stopped: the daemon is stopping", store.GetRun(recent.RunId!.Value)!.ErrorMessage);
     }
 

@@ -2,6 +2,7 @@ using BenchRunner.Core.Diagnostics;
 using BenchRunner.Daemon.Settings;
 using BenchRunner.Daemon.Tests.Support;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Daemon.Tests.Hosting;
 
@@ -28,7 +29,7 @@ public sealed class BenchDaemonScheduleTests
         Assert.NotEmpty(rig.Log.Named("TimeLimit"));
 
         await rig.StopAsync();
-        using var store = ResultStore.Open(rig.Settings.DatabasePath);
+        using var store = SqliteResultStore.Open(rig.Settings.DatabasePath);
         var run = store.GetRun(first.RunId!.Value)!;
         Assert.Equal(RunStatus.Stopped, run.Status);
         // The run records that its time limit stopped it, not an operator.

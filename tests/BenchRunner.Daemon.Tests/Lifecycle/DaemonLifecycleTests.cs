@@ -1,6 +1,7 @@
 using BenchRunner.Daemon.Status;
 using BenchRunner.Daemon.Tests.Support;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 using Microsoft.Data.Sqlite;
 
 namespace BenchRunner.Daemon.Tests.Lifecycle;
@@ -27,7 +28,7 @@ public sealed class DaemonLifecycleTests
 
         Assert.Equal(0, exitCode);
         Assert.Contains(daemon.Lines, l => l.Contains("stopped: the daemon is stopping", StringComparison.Ordinal));
-        using var store = ResultStore.Open(home.PathOf("results.db"));
+        using var store = SqliteResultStore.Open(home.PathOf("results.db"));
         var run = Assert.Single(store.ListRuns());
         Assert.Equal(RunStatus.Stopped, run.Status);
         Assert.Equal("stopped: the daemon is stopping", run.ErrorMessage);
@@ -63,7 +64,7 @@ public sealed class DaemonLifecycleTests
             Assert.Equal(0, await restarted.WaitForExitAsync());
         }
 
-        using (var store = ResultStore.Open(home.PathOf("results.db")))
+        using (var store = SqliteResultStore.Open(home.PathOf("results.db")))
         {
             var run = Assert.Single(store.ListRuns());
             Assert.Equal(RunStatus.Interrupted, run.Status);

@@ -9,6 +9,7 @@ using BenchRunner.Simulator.Bench;
 using BenchRunner.Simulator.Circuits;
 using BenchRunner.Simulator.Devices;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Execution.Tests.Batch;
 
@@ -16,13 +17,13 @@ public sealed class BatchSessionTests : IDisposable
 {
     private static readonly TimeSpan Limit = TimeSpan.FromSeconds(60);
     private readonly TempDirectory _dir = new();
-    private readonly ResultStore _store;
+    private readonly SqliteResultStore _store;
     private readonly VirtualBench _bench = VirtualBench.CreateDemo(seed: 5);
     private readonly Boards _boards;
 
     public BatchSessionTests()
     {
-        _store = ResultStore.Open(_dir.PathOf("lot.db"));
+        _store = SqliteResultStore.Open(_dir.PathOf("lot.db"));
         _boards = new Boards(_bench);
     }
 

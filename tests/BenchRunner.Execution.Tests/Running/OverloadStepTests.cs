@@ -8,6 +8,7 @@ using BenchRunner.Execution.Tests.Support;
 using BenchRunner.Simulator.Bench;
 using BenchRunner.Simulator.Generator;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Execution.Tests.Running;
 
@@ -23,10 +24,10 @@ public sealed class OverloadStepTests
     /// from memory). So with 10 dB more attenuation the 2nd harmonic stays put and the 3rd falls by
     /// 20 dB, the 3 dB/dB rule.
     /// </summary>
-    private static (PlanRunner Runner, VirtualBench Bench) Create(ResultStore? store, string benchFile = "bench-virtual.yaml") =>
+    private static (PlanRunner Runner, VirtualBench Bench) Create(SqliteResultStore? store, string benchFile = "bench-virtual.yaml") =>
         Create(store, BenchFile.Load(RepositoryFiles.Example(benchFile)));
 
-    private static (PlanRunner Runner, VirtualBench Bench) Create(ResultStore? store, BenchDefinition definition)
+    private static (PlanRunner Runner, VirtualBench Bench) Create(SqliteResultStore? store, BenchDefinition definition)
     {
         var harmonics = new[] { GeneratorHarmonic.Of(2, Ratio.FromDecibels(-20)), GeneratorHarmonic.Of(3, Ratio.FromDecibels(-80)) };
         var bench = new VirtualBench(5, path: FixedPath.Loss(Ratio.FromDecibels(1)), generatorOptions: new SignalGeneratorOptions { Harmonics = harmonics });
@@ -123,7 +124,7 @@ public sealed class OverloadStepTests
     public async Task CheckOverload_WithAStore_RecordsBothSweepsTheVerdictAndTheFlags()
     {
         using var dir = new TempDirectory();
-        using var store = ResultStore.Open(dir.PathOf("runs.db"));
+        using var store = SqliteResultStore.Open(dir.PathOf("runs.db"));
         var (runner, bench) = Create(store);
 
         var outcome = await runner.RunAsync(Plan("lines: [275 MHz]"), Context(), null, CancellationToken.None).WaitAsync(VirtualRuns.Limit);
@@ -148,7 +149,7 @@ public sealed class OverloadStepTests
     public async Task Sweep_BehindACompensatedProbe_ReportsLevelsAtTheProbedPointAndRecordsWhatWasCompensated()
     {
         using var dir = new TempDirectory();
-        using var store = ResultStore.Open(dir.PathOf("runs.db"));
+        using var store = SqliteResultStore.Open(dir.PathOf("runs.db"));
         var (runner, _) = Create(store, "bench-probe.yaml");
         var plan = PlanFile.Parse("""
             plan: probed
@@ -178,7 +179,7 @@ public sealed class OverloadStepTests
     public async Task Sweep_OutsideTheCableTable_IsStoredAsReadAndFlaggedUncalibrated()
     {
         using var dir = new TempDirectory();
-        using var store = ResultStore.Open(dir.PathOf("runs.db"));
+        using var store = SqliteResultStore.Open(dir.PathOf("runs.db"));
         var definition = BenchFile.Parse("""
             bench: b
             instruments:

@@ -2,6 +2,7 @@ using BenchRunner.Execution.Running;
 using BenchRunner.Execution.Tests.Support;
 using BenchRunner.Simulator.Bench;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Execution.Tests.Running;
 
@@ -11,7 +12,7 @@ public sealed class PlanRunnerRepeatTests
     public async Task RunRepeatedly_StepsBeforeTheFirstSweepRunOnceTheRestEveryPass_AllInOneRun()
     {
         using var dir = new TempDirectory();
-        using var store = ResultStore.Open(dir.PathOf("runs.db"));
+        using var store = SqliteResultStore.Open(dir.PathOf("runs.db"));
         var runner = VirtualRuns.Runner(VirtualBench.CreateDemo(seed: 2), store);
         var plan = VirtualRuns.CheckPlan();
         var observer = new CollectingObserver();
@@ -42,7 +43,7 @@ public sealed class PlanRunnerRepeatTests
     public async Task Run_WithoutAMode_IsRecordedAsASingleRun()
     {
         using var dir = new TempDirectory();
-        using var store = ResultStore.Open(dir.PathOf("runs.db"));
+        using var store = SqliteResultStore.Open(dir.PathOf("runs.db"));
         var runner = VirtualRuns.Runner(VirtualBench.CreateDemo(seed: 2), store);
 
         var outcome = await runner.RunAsync(VirtualRuns.CheckPlan(),

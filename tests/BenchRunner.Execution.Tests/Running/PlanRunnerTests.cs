@@ -5,12 +5,13 @@ using BenchRunner.Execution.Tests.Support;
 using BenchRunner.Simulator.Bench;
 using BenchRunner.Simulator.Devices;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Execution.Tests.Running;
 
 public sealed class PlanRunnerTests
 {
-    private static (PlanRunner Runner, VirtualBench Bench) Create(ResultStore? store)
+    private static (PlanRunner Runner, VirtualBench Bench) Create(SqliteResultStore? store)
     {
         var bench = VirtualBench.CreateDemo(seed: 3);
         return (VirtualRuns.Runner(bench, store), bench);
@@ -19,7 +20,7 @@ public sealed class PlanRunnerTests
     private static RunContext Context(string serial) => new("plan text", null, "0.1.0", "test-host") { DutSerial = serial, Lot = "PSF-24-L07" };
 
     /// <summary>Runs the example check plan with a token cancelled before it starts.</summary>
-    private static async Task<RunOutcome> RunCancelledAsync(ResultStore? store, RunContext context)
+    private static async Task<RunOutcome> RunCancelledAsync(SqliteResultStore? store, RunContext context)
     {
         var (runner, _) = Create(store);
         using var cts = new CancellationTokenSource();
@@ -31,7 +32,7 @@ public sealed class PlanRunnerTests
     public async Task Run_TunedBoard_PassesAndCommitsEverySweepAndCheck()
     {
         using var dir = new TempDirectory();
-        using var store = ResultStore.Open(dir.PathOf("runs.db"));
+        using var store = SqliteResultStore.Open(dir.PathOf("runs.db"));
         var (runner, _) = Create(store);
         var plan = VirtualRuns.CheckPlan();
         var observer = new CollectingObserver();
@@ -94,7 +95,7 @@ public sealed class PlanRunnerTests
     public async Task Run_CancelledByTheOperator_IsStoppedAndKeepsTheRun()
     {
         using var dir = new TempDirectory();
-        using var store = ResultStore.Open(dir.PathOf("runs.db"));
+        using var store = SqliteResultStore.Open(dir.PathOf("runs.db"));
 
         var outcome = await RunCancelledAsync(store, Context("PSF-24-0001"));
 
@@ -109,7 +110,7 @@ public sealed class PlanRunnerTests
     public async Task Run_CancelledWithAStopReason_RecordsThatReason()
     {
         using var dir = new TempDirectory();
-        using var store = ResultStore.Open(dir.PathOf("runs.db"));
+        using var store = SqliteResultStore.Open(dir.PathOf("runs.db"));
         var asked = 0;
         var context = Context("PSF-24-0001") with { StopReason = () => { asked++; return "stopped: the time limit of 600 s was reached"; } };
 
@@ -151,7 +152,7 @@ public sealed class PlanRunnerTests
     public async Task Run_RepeatBlock_SweepsAsOftenAsItSays(string repeatHow, int sweeps, RunStatus expected)
     {
         using var dir = new TempDirectory();
-        using var store = ResultStore.Open(dir.PathOf("runs.db"));
+        using var store = SqliteResultStore.Open(dir.PathOf("runs.db"));
         var (runner, _) = Create(store);
         var plan = PlanFile.Parse($$"""
             plan: repeat

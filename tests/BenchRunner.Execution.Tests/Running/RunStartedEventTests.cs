@@ -2,6 +2,7 @@ using BenchRunner.Execution.Running;
 using BenchRunner.Execution.Tests.Support;
 using BenchRunner.Simulator.Bench;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Execution.Tests.Running;
 
@@ -11,7 +12,7 @@ public sealed class RunStartedEventTests
     public async Task Run_FirstEvent_IsRunStartedWithTheStoredRunsId()
     {
         using var dir = new TempDirectory();
-        using var store = ResultStore.Open(dir.PathOf("runs.db"));
+        using var store = SqliteResultStore.Open(dir.PathOf("runs.db"));
         var runner = VirtualRuns.Runner(VirtualBench.CreateDemo(seed: 3), store);
         var plan = VirtualRuns.CheckPlan();
         var observer = new CollectingObserver();

@@ -5,6 +5,7 @@ using BenchRunner.Instruments.Connections;
 using BenchRunner.Simulator.Bench;
 using BenchRunner.Simulator.Endpoints;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Execution.Tests.Support;
 
@@ -15,7 +16,7 @@ internal static class VirtualRuns
     public static readonly TimeSpan Limit = TimeSpan.FromSeconds(60);
 
     /// <summary>A runner for <paramref name="definition"/> (default: the example virtual bench file) whose <c>sim:</c> connections reach <paramref name="bench"/>.</summary>
-    public static PlanRunner Runner(VirtualBench bench, ResultStore? store, BenchDefinition? definition = null)
+    public static PlanRunner Runner(VirtualBench bench, SqliteResultStore? store, BenchDefinition? definition = null)
     {
         var transports = SimulatorConnections.Register(new TransportFactory(), new VirtualBenchServers(bench));
         return new PlanRunner(definition ?? BenchFile.Load(RepositoryFiles.Example("bench-virtual.yaml")), transports, store);

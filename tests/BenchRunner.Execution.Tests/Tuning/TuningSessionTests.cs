@@ -10,6 +10,7 @@ using BenchRunner.Simulator.Devices;
 using BenchRunner.Simulator.Endpoints;
 using BenchRunner.Simulator.NetworkAnalyser;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Execution.Tests.Tuning;
 
@@ -41,7 +42,7 @@ public sealed class TuningSessionTests
     private static TestPlan Plan() => PlanFile.Load(RepositoryFiles.Example("plans/psf-137-tune.yaml"));
 
     /// <summary>A noise-free virtual bench whose board follows the demo trimmer script on <paramref name="clock"/>.</summary>
-    private static PlanRunner Runner(ManualTimeProvider clock, ResultStore? store)
+    private static PlanRunner Runner(ManualTimeProvider clock, SqliteResultStore? store)
     {
         var bench = new VirtualBench(seed: 5, networkAnalyserOptions: new NetworkAnalyserOptions { NoiseEnabled = false });
         bench.NetworkAnalyser.DeviceUnderTest = TuningDemo.Board(clock, TurnTime);
@@ -144,7 +145,7 @@ public sealed class TuningSessionTests
     public async Task Run_WithAStore_CommitsEverySweepWithItsFiguresAsOneTuningRun()
     {
         using var dir = new TempDirectory();
-        using var store = ResultStore.Open(dir.PathOf("runs.db"));
+        using var store = SqliteResultStore.Open(dir.PathOf("runs.db"));
         var clock = new ManualTimeProvider();
         var t0 = clock.GetUtcNow();
         var observer = new Stepper(clock);
@@ -177,7 +178,7 @@ public sealed class TuningSessionTests
     public async Task Run_CancelledMidSession_IsStoppedAndKeepsEverySweep()
     {
         using var dir = new TempDirectory();
-        using var store = ResultStore.Open(dir.PathOf("runs.db"));
+        using var store = SqliteResultStore.Open(dir.PathOf("runs.db"));
         var clock = new ManualTimeProvider();
         using var cts = new CancellationTokenSource();
         var observer = new Stepper(clock, cts, cancelAt: 4);

@@ -4,6 +4,7 @@ using BenchRunner.Core.Traces;
 using BenchRunner.Execution.LimitRecords;
 using BenchRunner.Execution.Plans;
 using BenchRunner.Storage;
+using BenchRunner.Storage.Sqlite;
 using Microsoft.Data.Sqlite;
 
 namespace BenchRunner.Reports.Tests.Support;
@@ -16,12 +17,12 @@ public sealed class LotStore : IDisposable
 
     public LotStore()
     {
-        Store = ResultStore.Open(_dir.PathOf("lot.db"), _clock);
+        Store = SqliteResultStore.Open(_dir.PathOf("lot.db"), _clock);
         Plan = PlanFile.Load(RepositoryFiles.Example("plans/psf-137-check.yaml"));
         PlanText = File.ReadAllText(RepositoryFiles.Example("plans/psf-137-check.yaml"));
     }
 
-    public ResultStore Store { get; }
+    public SqliteResultStore Store { get; }
 
     public TestPlan Plan { get; }
 

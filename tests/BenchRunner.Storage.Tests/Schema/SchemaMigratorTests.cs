@@ -1,3 +1,4 @@
+using BenchRunner.Storage.Sqlite;
 using BenchRunner.Storage.Schema;
 using BenchRunner.Storage.Tests.Support;
 
@@ -23,7 +24,7 @@ public sealed class SchemaMigratorTests : IDisposable
     {
         var path = _dir.PathOf("results.db");
         long runId;
-        using (var v1 = ResultStore.Open(path, TimeProvider.System, SchemaMigrations.All.Take(1).ToList()))
+        using (var v1 = SqliteResultStore.Open(path, TimeProvider.System, SchemaMigrations.All.Take(1).ToList()))
         {
             runId = v1.StartRun(Samples.Run());
             v1.FinishRun(runId, RunStatus.Passed);
@@ -33,7 +34,7 @@ public sealed class SchemaMigratorTests : IDisposable
             .Append(new Migration(2, "fixture", "ALTER TABLE runs ADD COLUMN fixture TEXT;"))
             .Append(new Migration(3, "fixture-index", "CREATE INDEX runs_by_fixture ON runs (fixture);"))
             .ToList();
-        using (var v3 = ResultStore.Open(path, TimeProvider.System, steps))
+        using (var v3 = SqliteResultStore.Open(path, TimeProvider.System, steps))
         {
             Assert.Equal(RunStatus.Passed, v3.GetRun(runId)!.Status);
         }
@@ -52,7 +53,7 @@ public sealed class SchemaMigratorTests : IDisposable
             .Append(new Migration(3, "broken", "CREATE TABLE half_done (x); CREATE TABLE runs (x);"))
             .ToList();
 
-        var error = Assert.Throws<ResultStoreException>(() => ResultStore.Open(path, TimeProvider.System, steps));
+        var error = Assert.Throws<ResultStoreException>(() => SqliteResultStore.Open(path, TimeProvider.System, steps));
 
         Assert.Contains("migration 3 (broken) failed", error.Message);
         Assert.Equal(2L, StoreFile.Scalar(path, "PRAGMA user_version"));
@@ -60,7 +61,7 @@ public sealed class SchemaMigratorTests : IDisposable
         Assert.Equal(0L, StoreFile.Scalar(path, "SELECT count(*) FROM sqlite_schema WHERE name = 'half_done'"));
 
         // The file is still usable by a build that knows version 2.
-        using var store = ResultStore.Open(path, TimeProvider.System, steps.Take(2).ToList());
+        using var store = SqliteResultStore.Open(path, TimeProvider.System, steps.Take(2).ToList());
         Assert.Empty(store.ListRuns());
     }
 }

@@ -1,3 +1,4 @@
+using BenchRunner.Storage.Sqlite;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Storage.Schema;
 using BenchRunner.Storage.Tests.Support;
@@ -16,7 +17,7 @@ public sealed class ValiditySchemaTests : IDisposable
     {
         var path = _dir.PathOf("results.db");
         long runId;
-        using (var v1 = ResultStore.Open(path, TimeProvider.System, SchemaMigrations.All.Take(1).ToList()))
+        using (var v1 = SqliteResultStore.Open(path, TimeProvider.System, SchemaMigrations.All.Take(1).ToList()))
         {
             runId = v1.StartRun(Samples.Run());
         }
@@ -34,7 +35,7 @@ public sealed class ValiditySchemaTests : IDisposable
             SweepId = 5, Margin = -0.4, MarginUnit = "dB", WorstFrequency = Frequency.FromMegahertz(136.5), Message = "0.4 dB below",
         };
 
-        using (var v2 = ResultStore.Open(path, TimeProvider.System, SchemaMigrations.All.Take(2).ToList()))
+        using (var v2 = SqliteResultStore.Open(path, TimeProvider.System, SchemaMigrations.All.Take(2).ToList()))
         {
             var check = Assert.Single(v2.GetChecks(runId));
             Assert.Equal(mask, check.Record);
@@ -52,7 +53,7 @@ public sealed class ValiditySchemaTests : IDisposable
     public void AddSweepAndCheck_CompensationOverloadFlagsAndDetail_RoundTrip()
     {
         var path = _dir.PathOf("results.db");
-        using var store = ResultStore.Open(path);
+        using var store = SqliteResultStore.Open(path);
         var runId = store.StartRun(Samples.Run());
         var sweep = new SweepRecord("output sweep", Samples.Spectrum())
         {
@@ -82,7 +83,7 @@ public sealed class ValiditySchemaTests : IDisposable
     [Fact]
     public void AddCheck_UndefinedFlagsOrBadDetail_AreRefused()
     {
-        using var store = ResultStore.Open(_dir.PathOf("results.db"));
+        using var store = SqliteResultStore.Open(_dir.PathOf("results.db"));
         var runId = store.StartRun(Samples.Run());
 
         Assert.Throws<ArgumentException>(() => store.AddCheck(runId, new CheckRecord("x", CheckKind.Overload, true) { Flags = (CheckFlags)8 }));

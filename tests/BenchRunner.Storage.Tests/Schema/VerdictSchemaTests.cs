@@ -1,3 +1,4 @@
+using BenchRunner.Storage.Sqlite;
 using BenchRunner.Storage.Schema;
 using BenchRunner.Storage.Tests.Support;
 
@@ -16,7 +17,7 @@ public sealed class VerdictSchemaTests : IDisposable
         var path = _dir.PathOf("results.db");
         var clock = new ManualTimeProvider();
         long passed, stopped, untested;
-        using (var v2 = ResultStore.Open(path, clock, SchemaMigrations.All.Take(2).ToList()))
+        using (var v2 = SqliteResultStore.Open(path, clock, SchemaMigrations.All.Take(2).ToList()))
         {
             passed = v2.StartRun(Samples.Run("PSF-24-0001"));
             v2.AddSweep(passed, new SweepRecord("passband", Samples.PassbandS21()));
@@ -34,7 +35,7 @@ public sealed class VerdictSchemaTests : IDisposable
         Assert.Equal(new object?[] { "PSF-24-0001", stopped, "stopped", 2L },
             StoreFile.Query(path, "SELECT dut_serial, run_id, verdict, runs FROM latest_verdicts ORDER BY dut_serial")[0]);
 
-        using (var v3 = ResultStore.Open(path))
+        using (var v3 = SqliteResultStore.Open(path))
         {
             Assert.Equal([RunStatus.Passed, RunStatus.Stopped, RunStatus.Error], v3.ListRuns().OrderBy(r => r.Id).Select(r => r.Status));
             Assert.Equal("stopped by the operator", v3.GetRun(stopped)!.ErrorMessage);

@@ -5,9 +5,9 @@ using BenchRunner.Core.Traces;
 using BenchRunner.Storage.Columns;
 using Microsoft.Data.Sqlite;
 
-namespace BenchRunner.Storage;
+namespace BenchRunner.Storage.Sqlite;
 
-public sealed partial class ResultStore
+public sealed partial class SqliteResultStore
 {
     private const string RunColumns = """
         id, mode, plan_name, plan_text, plan_sha256, bench_name, bench_text, status, operator, dut_serial, lot,

@@ -2,9 +2,9 @@ using BenchRunner.Core.Traces;
 using BenchRunner.Storage.Columns;
 using Microsoft.Data.Sqlite;
 
-namespace BenchRunner.Storage;
+namespace BenchRunner.Storage.Sqlite;
 
-public sealed partial class ResultStore
+public sealed partial class SqliteResultStore
 {
     /// <summary>Records the start of a run, with status running and the start time from the clock.</summary>
     /// <returns>The new run's id.</returns>

@@ -4,7 +4,7 @@ using BenchRunner.Storage.Locking;
 using BenchRunner.Storage.Schema;
 using Microsoft.Data.Sqlite;
 
-namespace BenchRunner.Storage;
+namespace BenchRunner.Storage.Sqlite;
 
 /// <summary>
 /// The result file: one SQLite database in WAL mode holding runs, the instruments they used,
@@ -17,7 +17,7 @@ namespace BenchRunner.Storage;
 /// serialised, so it may be shared between threads. Storage keeps what it is given: it knows
 /// nothing of transports, instrument protocols or plan syntax.
 /// </remarks>
-public sealed partial class ResultStore : IDisposable, IAsyncDisposable
+public sealed partial class SqliteResultStore : IResultStore
 {
     /// <summary>The message stored with a run found still running at open.</summary>
     public const string InterruptedMessage = "the program stopped before the run finished; it was still marked running when the result file was next opened";
@@ -31,7 +31,7 @@ public sealed partial class ResultStore : IDisposable, IAsyncDisposable
     private readonly Lock _gate = new();
     private bool _disposed;
 
-    private ResultStore(string path, SqliteConnection connection, StoreLock storeLock, TimeProvider time)
+    private SqliteResultStore(string path, SqliteConnection connection, StoreLock storeLock, TimeProvider time)
     {
         Path = path;
         _connection = connection;
@@ -60,11 +60,11 @@ public sealed partial class ResultStore : IDisposable, IAsyncDisposable
     /// <param name="path">The file; its folder must exist. The store also uses <c>path-wal</c>, <c>path-shm</c> and <c>path-lock</c> beside it.</param>
     /// <param name="timeProvider">The clock for timestamps; the system clock by default.</param>
     /// <exception cref="ResultStoreException">Not a result file, a newer schema, a damaged file, or the file cannot be opened.</exception>
-    public static ResultStore Open(string path, TimeProvider? timeProvider = null) =>
+    public static SqliteResultStore Open(string path, TimeProvider? timeProvider = null) =>
         Open(path, timeProvider ?? TimeProvider.System, SchemaMigrations.All);
 
     /// <summary>Opens with the given migrations (tests of the migration machinery).</summary>
-    internal static ResultStore Open(string path, TimeProvider time, IReadOnlyList<Migration> migrations)
+    internal static SqliteResultStore Open(string path, TimeProvider time, IReadOnlyList<Migration> migrations)
     {
         ArgumentException.ThrowIfNullOrWhiteSpace(path);
         var fullPath = System.IO.Path.GetFullPath(path);
@@ -82,7 +82,7 @@ public sealed partial class ResultStore : IDisposable, IAsyncDisposable
 
             // Taken only once the file is known to be a result file, so a refused file gets no lock file beside it.
             storeLock = StoreLock.Take(fullPath, BusyTimeout);
-            var store = new ResultStore(fullPath, connection, storeLock, time);
+            var store = new SqliteResultStore(fullPath, connection, storeLock, time);
             if (storeLock.IsSole)
             {
                 store.InterruptedAtOpen = store.MarkRunningAsInterrupted();
