@@ -23,6 +23,20 @@ public sealed class StopGateTests
     }
 
     [Fact]
+    public void RequestStop_DuringAnOverloadCheck_LetsItsSweepsFinish()
+    {
+        var time = new ManualTimeProvider();
+        using var gate = new StopGate(time);
+        gate.OnEvent(Step("check-overload"));
+
+        gate.RequestStop("the daemon is stopping", TimeSpan.FromSeconds(20));
+        Assert.False(gate.Token.IsCancellationRequested);
+
+        gate.OnEvent(Step("check-figures"));
+        Assert.True(gate.Token.IsCancellationRequested);
+    }
+
+    [Fact]
     public void RequestStop_DuringAWait_TakesEffectAtOnce()
     {
         using var gate = new StopGate(new ManualTimeProvider());
