@@ -1,4 +1,5 @@
 using BenchRunner.Core.Quantities;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Storage;
 

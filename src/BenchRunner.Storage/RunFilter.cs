@@ -1,3 +1,4 @@
+using BenchRunner.Core.Runs;
 namespace BenchRunner.Storage;
 
 /// <summary>Which runs <see cref="IResultReader.ListRunsAsync"/> returns; every condition given must hold. The default matches all runs.</summary>

@@ -1,5 +1,6 @@
 using BenchRunner.Core.Figures;
 using BenchRunner.Core.Traces;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Storage;
 

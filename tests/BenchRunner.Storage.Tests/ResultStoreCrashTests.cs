@@ -1,6 +1,7 @@
 using BenchRunner.Storage.Sqlite;
 using BenchRunner.Core.Traces;
 using BenchRunner.Storage.Tests.Support;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Storage.Tests;
 

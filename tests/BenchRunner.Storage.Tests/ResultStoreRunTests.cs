@@ -2,6 +2,7 @@ using BenchRunner.Storage.Sqlite;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Storage.Tests.Support;
 using Microsoft.Data.Sqlite;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Storage.Tests;
 

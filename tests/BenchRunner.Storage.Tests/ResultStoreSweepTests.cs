@@ -4,6 +4,7 @@ using BenchRunner.Core.Figures;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;
 using BenchRunner.Storage.Tests.Support;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Storage.Tests;
 

@@ -2,6 +2,7 @@ using BenchRunner.Storage.Sqlite;
 using System.Text.Json;
 using BenchRunner.Core.Figures;
 using BenchRunner.Storage.Tests.Support;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Storage.Tests;
 

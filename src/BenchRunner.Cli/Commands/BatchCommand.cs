@@ -12,6 +12,8 @@ using BenchRunner.Simulator.Bench;
 using BenchRunner.Simulator.Devices;
 using BenchRunner.Simulator.Endpoints;
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
+using BenchRunner.Execution.Preparation;
 
 namespace BenchRunner.Cli.Commands;
 
@@ -58,7 +60,8 @@ public static class BatchCommand
             var planPath = parsed.GetRequiredValue(plan);
             using var builtIn = parsed.GetValue(bench) is null ? DemoFiles.Extract() : null;
             var benchPath = parsed.GetValue(bench) ?? builtIn!.Bench;
-            var validated = PlanValidator.Load(planPath, benchPath);
+            var prepared = RunPreparation.Load(planPath, benchPath);
+            var benchDefinition = prepared.RequiredBench.Definition;
             var source = parsed.GetValue(serials) switch
             {
                 null => SerialSource.FromReader(console.In, console.Error, console.Error, echo: !console.InIsTerminal),
@@ -66,17 +69,17 @@ public static class BatchCommand
                 var file => SerialSource.FromFile(file),
             };
 
-            var (factory, fixture) = Fixture(validated.Bench!, transports, console, cancellationToken);
+            var (factory, fixture) = Fixture(benchDefinition, transports, console, cancellationToken);
             var dbPath = parsed.GetRequiredValue(db);
             using var store = ResultStoreOpener.Open(dbPath);
-            var runner = new PlanRunner(validated.Bench!, factory, store);
-            var context = new RunContext(File.ReadAllText(planPath), File.ReadAllText(benchPath), RunCommand.ThisVersion(), Environment.MachineName)
+            var runner = new PlanRunner(benchDefinition, factory);
+            var context = prepared.Context(RunCommand.ThisVersion(), Environment.MachineName) with
             {
                 Lot = lotName,
                 Operator = parsed.GetValue(op),
             };
-            var session = new BatchSession(runner, validated.Plan, context, store, fixture);
-            console.Error.WriteLine($"Batch of lot {lotName}: plan {validated.Plan.Name} on {validated.Bench!.Name}{(fixture is VirtualLotFixture ? " (virtual fixture: the simulated lot)" : "")}.");
+            var session = new BatchSession(runner, prepared.Plan, context, store, fixture);
+            console.Error.WriteLine($"Batch of lot {lotName}: plan {prepared.Plan.Name} on {benchDefinition.Name}{(fixture is VirtualLotFixture ? " (virtual fixture: the simulated lot)" : "")}.");
             console.Error.WriteLine(DemoCommand.SafetyNote);
 
             var results = new List<BoardResult>();

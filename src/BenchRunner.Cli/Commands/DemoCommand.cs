@@ -12,6 +12,8 @@ using BenchRunner.Simulator.Bench;
 using BenchRunner.Simulator.Devices;
 using BenchRunner.Simulator.Endpoints;
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
+using BenchRunner.Execution.Preparation;
 
 namespace BenchRunner.Cli.Commands;
 
@@ -47,13 +49,13 @@ public static class DemoCommand
             var report = asJson ? console.Error : console.Out;
             var dbPath = parsed.GetRequiredValue(db);
             using var files = DemoFiles.Extract();
-            var validated = PlanValidator.Load(files.Plan, files.Bench);
+            var prepared = RunPreparation.Load(files.Plan, files.Bench);
             var bench = VirtualBench.CreateDemo(parsed.GetValue(seed));
             var transports = SimulatorConnections.Register(new TransportFactory(), new VirtualBenchServers(bench), cancellationToken);
             using var store = ResultStoreOpener.Open(dbPath);
-            var runner = new PlanRunner(validated.Bench!, transports, store);
+            var runner = new RunLauncher(new PlanRunner(prepared.RequiredBench.Definition, transports), store);
 
-            report.WriteLine($"BenchRunner demo: the virtual bench tests two 137 MHz preselector boards against the plan \"{validated.Plan.Name}\".");
+            report.WriteLine($"BenchRunner demo: the virtual bench tests two 137 MHz preselector boards against the plan \"{prepared.Plan.Name}\".");
             report.WriteLine(SafetyNote);
             var boards = new List<DemoBoardResult>();
             foreach (var (serial, board) in new[] { ("PSF-24-0001", Preselector137.TunedBoard()), ("PSF-24-0002", Preselector137.DetunedBoard()) })
@@ -61,14 +63,16 @@ public static class DemoCommand
                 report.WriteLine();
                 report.WriteLine($"Board {serial}");
                 bench.NetworkAnalyser.DeviceUnderTest = board;
-                var capture = new FigureCapture(new RunProgressView(report, console.UseColour && !asJson));
-                var context = new RunContext(File.ReadAllText(files.Plan), File.ReadAllText(files.Bench), RunCommand.ThisVersion(), Environment.MachineName)
+                var capture = new FigureCapture();
+                var view = new RunProgressView(report, console.UseColour && !asJson);
+                var context = prepared.Context(RunCommand.ThisVersion(), Environment.MachineName) with
                 {
                     DutSerial = serial,
                     Lot = "PSF-24-L07",
                     Operator = "demo",
                 };
-                var outcome = await runner.RunAsync(validated.Plan, context, capture, cancellationToken).ConfigureAwait(false);
+                var outcome = await runner.RunAsync(prepared.Plan, context,
+                    [RunSubscription.Lossless(capture, "figure capture"), RunSubscription.View(view, "progress")], cancellationToken).ConfigureAwait(false);
                 boards.Add(new DemoBoardResult(serial, outcome, capture.Figures));
                 if (outcome.Status == RunStatus.Stopped)
                 {

@@ -14,6 +14,8 @@ using BenchRunner.Execution.Validation;
 using BenchRunner.Instruments.Connections;
 using BenchRunner.Instruments.Profiles;
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
+using BenchRunner.Execution.Preparation;
 
 namespace BenchRunner.Cli.Commands;
 
@@ -55,7 +57,8 @@ public static class OverloadCommand
         command.SetAction(async (parsed, cancellationToken) =>
         {
             var benchPath = parsed.GetRequiredValue(bench);
-            var definition = BenchFile.Load(benchPath);
+            var prepared = RunPreparation.LoadBench(benchPath);
+            var definition = prepared.Definition;
             var (lo, hi) = Span(parsed.GetValue(centre), parsed.GetValue(span), parsed.GetValue(start), parsed.GetValue(stop));
             var toneFrequency = parsed.GetValue(tone) is { } t ? OverloadRequest.ParseFrequency(t, "--tone") : (Frequency?)null;
             var toneAt = parsed.GetValue(toneLevel) is { } l ? OverloadRequest.Parse(l, "--tone-level", Level.Parse) : (Level?)null;
@@ -82,24 +85,20 @@ public static class OverloadCommand
                 ToneLevel = toneAt,
             };
 
-            var planText = request.ToPlanText();
-            var plan = PlanFile.Parse(planText, "benchrunner overload (generated plan)", Directory.GetCurrentDirectory());
-            if (PlanValidator.CheckAgainstBench(plan, definition) is { Count: > 0 } problems)
-            {
-                throw new InputFormatException(problems);
-            }
+            var run = RunPreparation.FromPlan(request.ToPlan(), prepared, "Written by benchrunner overload.");
+            var plan = run.Plan;
 
             var dbPath = parsed.GetRequiredValue(db);
             using var store = ResultStoreOpener.Open(dbPath);
             console.Error.WriteLine($"Overload check of {request.Analyser} on {definition.Name}: {request.Start} to {request.Stop}, {request.Attenuation} then {request.Attenuation + request.RaiseBy} input attenuation");
-            foreach (var caution in ProbingCautions.For(plan, definition))
+            foreach (var caution in run.Cautions)
             {
                 console.Error.WriteLine(caution);
             }
 
-            var runner = new PlanRunner(definition, transports(), store);
-            var context = new RunContext(planText, File.ReadAllText(benchPath), RunCommand.ThisVersion(), Environment.MachineName);
-            var outcome = await runner.RunAsync(plan, context, new RunProgressView(console.Error, console.UseColour), cancellationToken).ConfigureAwait(false);
+            var runner = new RunLauncher(new PlanRunner(definition, transports()), store);
+            var context = run.Context(RunCommand.ThisVersion(), Environment.MachineName);
+            var outcome = await runner.RunAsync(plan, context, [RunSubscription.View(new RunProgressView(console.Error, console.UseColour), "progress")], cancellationToken).ConfigureAwait(false);
             var check = outcome.Checks.FirstOrDefault();
             if (parsed.GetValue(json))
             {

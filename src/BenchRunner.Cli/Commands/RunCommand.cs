@@ -9,6 +9,8 @@ using BenchRunner.Execution.Running;
 using BenchRunner.Execution.Validation;
 using BenchRunner.Instruments.Connections;
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
+using BenchRunner.Execution.Preparation;
 
 namespace BenchRunner.Cli.Commands;
 
@@ -37,23 +39,24 @@ public static class RunCommand
         {
             var planPath = parsed.GetRequiredValue(plan);
             var benchPath = parsed.GetRequiredValue(bench);
-            var validated = PlanValidator.Load(planPath, benchPath);
+            var prepared = RunPreparation.Load(planPath, benchPath);
+            var benchDefinition = prepared.RequiredBench.Definition;
             var dbPath = parsed.GetRequiredValue(db);
             using var store = ResultStoreOpener.Open(dbPath);
-            var runner = new PlanRunner(validated.Bench!, transports(), store);
-            var context = new RunContext(File.ReadAllText(planPath), File.ReadAllText(benchPath), ThisVersion(), Environment.MachineName)
+            var runner = new RunLauncher(new PlanRunner(benchDefinition, transports()), store);
+            var context = prepared.Context(ThisVersion(), Environment.MachineName) with
             {
                 DutSerial = parsed.GetValue(dut),
                 Lot = parsed.GetValue(lot),
                 Operator = parsed.GetValue(op),
             };
-            console.Error.WriteLine($"Running {validated.Plan.Name} on {validated.Bench!.Name}{(context.DutSerial is null ? "" : $" for {context.DutSerial}")}");
-            foreach (var caution in ProbingCautions.For(validated.Plan, validated.Bench))
+            console.Error.WriteLine($"Running {prepared.Plan.Name} on {benchDefinition.Name}{(context.DutSerial is null ? "" : $" for {context.DutSerial}")}");
+            foreach (var caution in prepared.Cautions)
             {
                 console.Error.WriteLine(caution);
             }
 
-            var outcome = await runner.RunAsync(validated.Plan, context, new RunProgressView(console.Error, console.UseColour), cancellationToken).ConfigureAwait(false);
+            var outcome = await runner.RunAsync(prepared.Plan, context, [RunSubscription.View(new RunProgressView(console.Error, console.UseColour), "progress")], cancellationToken).ConfigureAwait(false);
             if (parsed.GetValue(json))
             {
                 WriteJson(outcome, dbPath, console.Out);

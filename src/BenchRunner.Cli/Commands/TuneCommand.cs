@@ -13,6 +13,8 @@ using BenchRunner.Instruments.Connections;
 using BenchRunner.Simulator.Bench;
 using BenchRunner.Simulator.Endpoints;
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
+using BenchRunner.Execution.Preparation;
 
 namespace BenchRunner.Cli.Commands;
 
@@ -98,14 +100,15 @@ public static class TuneCommand
                 factory = transports();
             }
 
-            var validated = PlanValidator.Load(planPath!, benchPath);
-            if (!validated.Plan.AllSteps().OfType<SweepStep>().Any())
+            var prepared = RunPreparation.Load(planPath!, benchPath);
+            var benchDefinition = prepared.RequiredBench.Definition;
+            if (!prepared.Plan.AllSteps().OfType<SweepStep>().Any())
             {
                 throw new UsageException($"{planPath}: the plan has no sweep step, so there is nothing to tune against; add a sweep and the checks to watch.");
             }
             var dbPath = parsed.GetValue(db) ?? (demo ? DemoCommand.DefaultDatabase : ResultsCommand.DefaultDatabase);
             using var store = ResultStoreOpener.Open(dbPath);
-            var context = new RunContext(File.ReadAllText(planPath!), File.ReadAllText(benchPath!), RunCommand.ThisVersion(), Environment.MachineName)
+            var context = prepared.Context(RunCommand.ThisVersion(), Environment.MachineName) with
             {
                 DutSerial = parsed.GetValue(dut) ?? (demo ? "PSF-24-0002" : null),
                 Operator = parsed.GetValue(op) ?? (demo ? "demo" : null),
@@ -114,9 +117,9 @@ public static class TuneCommand
             bool asJson = parsed.GetValue(json);
             bool live = console.IsTerminal && !asJson && !parsed.GetValue(plain);
             var report = asJson ? console.Error : console.Out;
-            var title = $"{validated.Plan.Name} on {validated.Bench!.Name}{(context.DutSerial is null ? "" : $" ({context.DutSerial})")}";
+            var title = $"{prepared.Plan.Name} on {benchDefinition.Name}{(context.DutSerial is null ? "" : $" ({context.DutSerial})")}";
             ITuningObserver view = live
-                ? new TuningLiveView(console.Out, title, options.Settle, console.UseColour, parsed.GetValue(bell), PlotWidth(), PlotHeight(validated.Plan))
+                ? new TuningLiveView(console.Out, title, options.Settle, console.UseColour, parsed.GetValue(bell), PlotWidth(), PlotHeight(prepared.Plan))
                 : new TuningLogView(report, options.Settle, parsed.GetValue(bell));
             if (!live)
             {
@@ -129,9 +132,9 @@ public static class TuneCommand
                 report.WriteLine(DemoCommand.SafetyNote);
             }
 
-            var session = new TuningSession(new PlanRunner(validated.Bench, factory, store), options);
+            var session = new TuningSession(new RunLauncher(new PlanRunner(benchDefinition, factory), store), options);
             using var signals = new StopSignal(cancellationToken);
-            var outcome = await session.RunAsync(validated.Plan, context, view, null, signals.Token).ConfigureAwait(false);
+            var outcome = await session.RunAsync(prepared.Plan, context, view, null, signals.Token).ConfigureAwait(false);
             if (asJson)
             {
                 WriteJson(outcome, dbPath, console.Out);

@@ -4,6 +4,7 @@ using System.Text.Json.Nodes;
 using BenchRunner.Core.Diagnostics;
 using BenchRunner.Core.Text;
 using BenchRunner.Execution.Plans;
+using BenchRunner.Execution.Preparation;
 using BenchRunner.Execution.Validation;
 
 namespace BenchRunner.Cli.Commands;
@@ -33,7 +34,7 @@ public static class ValidateCommand
             bool asJson = parsed.GetValue(json);
             try
             {
-                var validated = PlanValidator.Load(parsed.GetRequiredValue(plan), parsed.GetValue(bench));
+                var validated = RunPreparation.Load(parsed.GetRequiredValue(plan), parsed.GetValue(bench));
                 Report(validated, console, asJson);
                 return ExitCodes.Success;
             }
@@ -66,7 +67,7 @@ public static class ValidateCommand
 
     private static readonly JsonSerializerOptions Indented = new() { WriteIndented = true };
 
-    private static void Report(ValidatedPlan validated, CliConsole console, bool asJson)
+    private static void Report(PreparedRun validated, CliConsole console, bool asJson)
     {
         var p = validated.Plan;
         var steps = p.AllSteps().ToList();
@@ -83,13 +84,13 @@ public static class ValidateCommand
 
             console.Out.WriteLine(new JsonObject
             {
-                ["valid"] = true, ["plan"] = p.Name, ["bench"] = validated.Bench?.Name, ["roles"] = roleArray,
+                ["valid"] = true, ["plan"] = p.Name, ["bench"] = validated.Bench?.Definition.Name, ["roles"] = roleArray,
                 ["steps"] = steps.Count, ["checks"] = checks,
             }.ToJsonString(Indented));
             return;
         }
 
-        console.Out.WriteLine($"Plan \"{p.Name}\" is valid{(validated.Bench is { } b ? $" on bench \"{b.Name}\"" : "")}.");
+        console.Out.WriteLine($"Plan \"{p.Name}\" is valid{(validated.Bench is { } b ? $" on bench \"{b.Definition.Name}\"" : "")}.");
         console.Out.WriteLine($"  roles   {roles}");
         console.Out.WriteLine($"  steps   {steps.Count}");
         console.Out.WriteLine($"  checks  {checks} ({steps.Count(s => s is MaskCheck)} mask, {Counted.Of(checks - overload - steps.Count(s => s is MaskCheck), "figure limit")}{(overload > 0 ? $", {overload} overload" : "")})");

@@ -4,6 +4,7 @@ using System.Text.Json.Nodes;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Validity;
 using BenchRunner.Execution.Running;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Cli.Output;
 

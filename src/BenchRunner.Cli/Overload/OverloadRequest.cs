@@ -1,5 +1,7 @@
 using System.Globalization;
-using System.Text;
+using BenchRunner.Core.Diagnostics;
+using BenchRunner.Core.Traces;
+using BenchRunner.Execution.Plans;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Execution.Bench;
 using BenchRunner.Instruments.Profiles;
@@ -76,51 +78,35 @@ public sealed class OverloadRequest
         };
     }
 
-    /// <summary>The request as a plan file's text (docs/plan-format.md); stored with the run as its plan.</summary>
-    public string ToPlanText()
+    /// <summary>Where the generated plan says it came from, in messages.</summary>
+    public const string Source = "benchrunner overload (generated plan)";
+
+    /// <summary>
+    /// The request as a plan (docs/plan-format.md): an optional test tone, the analyser's setting, the
+    /// overload check, and the tone switched off again. It runs through the same pre-check, interlock
+    /// and result file as any plan; the text stored with it is its faithful rendering.
+    /// </summary>
+    public TestPlan ToPlan()
     {
-        var text = new StringBuilder();
-        Line(text, "# Written by benchrunner overload.");
-        Line(text, $"plan: {PlanName}");
-        Line(text, "roles:");
-        Line(text, $"  {Analyser}: spectrum-analyser");
+        var at = SourceLocation.OfFile(Source);
+        var roles = new List<RoleRequirement> { new(Analyser, InstrumentKind.SpectrumAnalyser, at) };
+        var steps = new List<PlanStep>();
         if (Generator is not null)
         {
-            Line(text, $"  {Generator}: signal-generator");
+            roles.Add(new RoleRequirement(Generator, InstrumentKind.SignalGenerator, at));
+            steps.Add(new GeneratorSetup("test tone", at, Generator, ToneFrequency, ToneLevel, true, at));
         }
 
-        Line(text, "steps:");
+        steps.Add(new SpectrumAnalyserSetup("analyser setup", at, Analyser, Start, Stop, Rbw, Attenuation, null));
+        steps.Add(new OverloadCheckStep("overload check", at, Analyser, new NamedTrace(TraceQuantity.Power, "spectrum", at),
+            RaiseBy, Threshold, Tolerance.Decibels, Carriers, Lines.Count > 0 ? Lines : null));
         if (Generator is not null)
         {
-            var settings = new List<string> { $"role: {Generator}" };
-            if (ToneFrequency is { } f) settings.Add($"frequency: {f}");
-            if (ToneLevel is { } l) settings.Add($"level: {l}");
-            settings.Add("output: on");
-            Line(text, $"  - name: test tone");
-            Line(text, $"    set-generator: {{ {string.Join(", ", settings)} }}");
+            steps.Add(new GeneratorSetup("test tone off", at, Generator, null, null, false, at));
         }
 
-        Line(text, "  - name: analyser setup");
-        Line(text, $"    set-spectrum-analyser: {{ role: {Analyser}, start: {Start}, stop: {Stop}, rbw: {Rbw}, attenuation: {Attenuation} }}");
-        Line(text, "  - name: overload check");
-        Line(text, "    check-overload:");
-        Line(text, $"      role: {Analyser}");
-        Line(text, "      trace: spectrum");
-        Line(text, $"      raise-by: {RaiseBy}");
-        Line(text, $"      threshold: {Threshold}");
-        Line(text, $"      tolerance: {Tolerance}");
-        if (Carriers.Count > 0) Line(text, $"      carriers: [{string.Join(", ", Carriers)}]");
-        if (Lines.Count > 0) Line(text, $"      lines: [{string.Join(", ", Lines)}]");
-        if (Generator is not null)
-        {
-            Line(text, "  - name: test tone off");
-            Line(text, $"    set-generator: {{ role: {Generator}, output: off }}");
-        }
-
-        return text.ToString();
+        return new TestPlan(PlanName, null, roles, steps, Source);
     }
-
-    private static void Line(StringBuilder text, string line) => text.Append(line).Append('\n');
 
     /// <summary>Parses a command-line value with its unit.</summary>
     /// <exception cref="UsageException">It does not parse.</exception>

@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text.Json;
 using System.Text.Json.Nodes;
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Cli.Results;
 

@@ -1,6 +1,7 @@
 using System.Globalization;
 using BenchRunner.Cli.Output;
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Cli.Results;
 

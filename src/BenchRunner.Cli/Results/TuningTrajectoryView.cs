@@ -2,6 +2,7 @@ using System.Globalization;
 using BenchRunner.Cli.Output;
 using BenchRunner.Core.Text;
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Cli.Results;
 

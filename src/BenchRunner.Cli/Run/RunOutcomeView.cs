@@ -1,6 +1,7 @@
 using System.Text.Json.Nodes;
 using BenchRunner.Execution.Running;
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Cli.Run;
 

@@ -1,14 +1,15 @@
 using BenchRunner.Cli.Output;
 using BenchRunner.Core.Text;
 using BenchRunner.Execution.Running;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Cli.Run;
 
 /// <summary>Shows a run's progress as it happens, one line per event, on standard error.</summary>
-public sealed class RunProgressView(TextWriter writer, bool colour) : IRunObserver
+public sealed class RunProgressView(TextWriter writer, bool colour) : IRunListener
 {
     /// <inheritdoc/>
-    public void OnEvent(RunEvent runEvent)
+    public ValueTask OnEventAsync(RunEvent runEvent, CancellationToken cancellationToken)
     {
         switch (runEvent)
         {
@@ -28,5 +29,7 @@ public sealed class RunProgressView(TextWriter writer, bool colour) : IRunObserv
                 writer.WriteLine($"    operator: {message.Text}");
                 break;
         }
+
+        return ValueTask.CompletedTask;
     }
 }

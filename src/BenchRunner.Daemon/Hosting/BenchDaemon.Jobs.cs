@@ -5,6 +5,7 @@ using BenchRunner.Daemon.Work;
 using BenchRunner.Execution.Running;
 using BenchRunner.Instruments.Adapters;
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Daemon.Hosting;
 
@@ -86,7 +87,7 @@ public sealed partial class BenchDaemon
     private async Task<(RunOutcome Outcome, string? StopReason)> ExecuteAsync(PlanJob job, int attempt, CancellationToken stopping)
     {
         using var gate = new StopGate(_time);
-        var observer = new RunLogObserver(_log, job, attempt, Status, _time);
+        var observer = new RunLogListener(_log, job, attempt, Status, _time);
         var names = string.Join(", ", job.Instruments);
         // Every event of the run carries the job, plan and instruments as properties in the log files.
         using var scope = _log.BeginScope(new Dictionary<string, object> { ["JobId"] = job.Id, ["Plan"] = job.Plan.Name, ["Instruments"] = names, ["Origin"] = job.Origin });
@@ -101,14 +102,16 @@ public sealed partial class BenchDaemon
             : null;
         try
         {
-            var runner = new PlanRunner(_bench, _transports, _store, _time);
+            var runner = new RunLauncher(new PlanRunner(_bench, _transports, _time), _store);
             var context = new RunContext(job.PlanText, _benchText, _softwareVersion, Environment.MachineName)
             {
                 Operator = "daemon",
                 // The run records why it was stopped: the time limit or the daemon stopping, not an operator.
                 StopReason = () => gate.Reason is { } reason ? $"stopped: {reason}" : null,
+                StopAtNextStep = gate.AtNextStep,
+                Recorded = observer.Recorded,
             };
-            var outcome = await runner.RunAsync(job.Plan, context, new FanOutObserver(gate, observer), gate.Token).ConfigureAwait(false);
+            var outcome = await runner.RunAsync(job.Plan, context, [RunSubscription.Lossless(observer, "daemon log")], gate.Token).ConfigureAwait(false);
             return (outcome, gate.Reason);
         }
         finally

@@ -13,8 +13,8 @@ using BenchRunner.Execution.Validation;
 using BenchRunner.Instruments.Adapters;
 using BenchRunner.Instruments.Connections;
 using BenchRunner.Storage;
-using BenchRunner.Storage.Sqlite;
 using Microsoft.Extensions.Logging;
+using BenchRunner.Execution.Preparation;
 
 namespace BenchRunner.Daemon.Hosting;
 
@@ -40,9 +40,10 @@ public sealed partial class BenchDaemon
     private readonly InstrumentHealthBoard _health;
     private readonly ConcurrentDictionary<string, byte> _taken = new(StringComparer.Ordinal);
     private readonly ConcurrentDictionary<string, Task> _jobs = new(StringComparer.Ordinal);
-    private readonly ConcurrentDictionary<string, (StopGate Gate, RunLogObserver Observer, PlanJob Job)> _running = new(StringComparer.Ordinal);
+    private readonly ConcurrentDictionary<string, (StopGate Gate, RunLogListener Observer, PlanJob Job)> _running = new(StringComparer.Ordinal);
     private readonly string _softwareVersion;
-    private SqliteResultStore? _store;
+    private readonly PreparedBench _preparedBench;
+    private IResultStore? _store;
     private int _nextJob;
 
     /// <summary>Creates the daemon.</summary>
@@ -60,8 +61,9 @@ public sealed partial class BenchDaemon
         ArgumentNullException.ThrowIfNull(logs);
         _log = logs.CreateLogger("BenchRunner.Daemon");
         _softwareVersion = softwareVersion;
-        _benchText = InputFile.ReadAllText(settings.BenchPath);
-        _bench = BenchFile.Load(settings.BenchPath);
+        _preparedBench = RunPreparation.LoadBench(settings.BenchPath);
+        _benchText = _preparedBench.Text;
+        _bench = _preparedBench.Definition;
         Leases = new InstrumentLeases(time);
         _health = new InstrumentHealthBoard(_bench, ProbeAsync, Leases, new Backoff(settings.RetryFirst, settings.RetryLongest), time, _log);
         Leases.Changed += _ => Status.Touch();
@@ -102,7 +104,7 @@ public sealed partial class BenchDaemon
     {
         DaemonLog.Starting(_log, _bench.Name, _settings.BenchPath, _settings.InboxFolder, _settings.DatabasePath, _settings.Schedules.Count);
         DaemonLog.SafetyCaution(_log, PlanRunner.InputCaution);
-        using var store = SqliteResultStore.Open(_settings.DatabasePath, _time);
+        using var store = ResultStores.Open(_settings.DatabasePath, _time);
         _store = store;
         if (store.InterruptedAtOpen.Count > 0)
         {
@@ -187,11 +189,7 @@ public sealed partial class BenchDaemon
         TestPlan plan;
         try
         {
-            plan = PlanFile.Parse(text, path, _settings.InboxFolder);
-            if (PlanValidator.CheckAgainstBench(plan, _bench) is { Count: > 0 } mismatch)
-            {
-                throw new InputFormatException(mismatch);
-            }
+            plan = RunPreparation.FromText(text, path, _settings.InboxFolder, _preparedBench).Plan;
         }
         catch (InputFormatException e)
         {
@@ -244,11 +242,7 @@ public sealed partial class BenchDaemon
         try
         {
             text = InputFile.ReadAllText(schedule.PlanPath);
-            plan = PlanFile.Parse(text, schedule.PlanPath, Path.GetDirectoryName(schedule.PlanPath) ?? ".");
-            if (PlanValidator.CheckAgainstBench(plan, _bench) is { Count: > 0 } mismatch)
-            {
-                throw new InputFormatException(mismatch);
-            }
+            plan = RunPreparation.FromText(text, schedule.PlanPath, Path.GetDirectoryName(schedule.PlanPath) ?? ".", _preparedBench).Plan;
         }
         catch (InputFormatException e)
         {

@@ -1,5 +1,6 @@
 using BenchRunner.Core.Text;
 using Microsoft.Extensions.Logging;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Daemon.Logging;
 

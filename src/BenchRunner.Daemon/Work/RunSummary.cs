@@ -3,6 +3,7 @@ using System.Text;
 using BenchRunner.Core.Text;
 using BenchRunner.Execution.Running;
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Daemon.Work;
 

@@ -1,7 +1,7 @@
 using BenchRunner.Execution.Plans;
 using BenchRunner.Execution.Running;
 using BenchRunner.Storage;
-using BenchRunner.Storage.Sqlite;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Execution.Batch;
 
@@ -13,22 +13,22 @@ namespace BenchRunner.Execution.Batch;
 /// </summary>
 public sealed class BatchSession
 {
-    private readonly PlanRunner _runner;
+    private readonly RunLauncher _runner;
     private readonly TestPlan _plan;
     private readonly RunContext _context;
-    private readonly SqliteResultStore _store;
+    private readonly IResultStore _store;
     private readonly IBoardFixture _fixture;
 
     /// <summary>Creates a session.</summary>
-    /// <param name="runner">Runs the plan; it must record into <paramref name="store"/>.</param>
+    /// <param name="runner">Runs the plan; its runs are recorded into <paramref name="store"/>.</param>
     /// <param name="plan">The validated plan every board is tested with.</param>
     /// <param name="context">The record kept with every run; its serial, mode and retest flag are set per board.</param>
     /// <param name="store">The result file: it holds the lot's history, which decides what is a retest.</param>
     /// <param name="fixture">Puts each board in place.</param>
     /// <exception cref="ArgumentException">A context without a lot.</exception>
-    public BatchSession(PlanRunner runner, TestPlan plan, RunContext context, SqliteResultStore store, IBoardFixture fixture)
+    public BatchSession(PlanRunner runner, TestPlan plan, RunContext context, IResultStore store, IBoardFixture fixture)
     {
-        _runner = runner ?? throw new ArgumentNullException(nameof(runner));
+        _runner = new RunLauncher(runner ?? throw new ArgumentNullException(nameof(runner)), store);
         _plan = plan ?? throw new ArgumentNullException(nameof(plan));
         _context = context ?? throw new ArgumentNullException(nameof(context));
         _store = store ?? throw new ArgumentNullException(nameof(store));
@@ -43,8 +43,8 @@ public sealed class BatchSession
     public string Lot => _context.Lot!;
 
     /// <summary>True when <paramref name="serial"/> already has a verdict (a passed or failed single or batch run) in the store.</summary>
-    public bool HasVerdict(string serial) =>
-        _store.ListRuns(new RunFilter { DutSerial = serial })
+    public async Task<bool> HasVerdictAsync(string serial, CancellationToken cancellationToken = default) =>
+        (await _store.ListRunsAsync(new RunFilter { DutSerial = serial }, cancellationToken).ConfigureAwait(false))
             .Any(r => r.Record.Mode != RunMode.Tuning && r.Status is RunStatus.Passed or RunStatus.Failed);
 
     /// <summary>
@@ -52,18 +52,18 @@ public sealed class BatchSession
     /// board left untested; the caller sees the token cancelled and ends the batch.
     /// </summary>
     /// <param name="serial">The board's serial, as <see cref="BoardSerial.TryRead"/> accepts it.</param>
-    /// <param name="observer">Sees the run's events, or null.</param>
+    /// <param name="listeners">See the run's events (views, logs), or null.</param>
     /// <param name="cancellationToken">Stops the board's test.</param>
     /// <exception cref="OperationCanceledException">Cancelled while the fixture was getting the board ready.</exception>
     /// <exception cref="ArgumentException">Not a serial.</exception>
-    public async Task<BoardResult> TestAsync(string serial, IRunObserver? observer, CancellationToken cancellationToken)
+    public async Task<BoardResult> TestAsync(string serial, IEnumerable<RunSubscription>? listeners, CancellationToken cancellationToken)
     {
         if (!BoardSerial.TryRead(serial, out var clean, out var problem))
         {
             throw new ArgumentException(problem, nameof(serial));
         }
 
-        bool retest = HasVerdict(clean!);
+        bool retest = await HasVerdictAsync(clean!, cancellationToken).ConfigureAwait(false);
         var ready = await _fixture.PrepareAsync(clean!, cancellationToken).ConfigureAwait(false);
         if (!ready.Ready)
         {
@@ -71,7 +71,7 @@ public sealed class BatchSession
         }
 
         var context = _context with { DutSerial = clean, IsRetest = retest, Mode = RunMode.Batch };
-        var outcome = await _runner.RunAsync(_plan, context, observer, cancellationToken).ConfigureAwait(false);
+        var outcome = await _runner.RunAsync(_plan, context, listeners, cancellationToken).ConfigureAwait(false);
         var reason = outcome.Status switch
         {
             RunStatus.Passed or RunStatus.Failed => null,

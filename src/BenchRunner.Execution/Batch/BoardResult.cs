@@ -1,5 +1,6 @@
 using BenchRunner.Execution.Running;
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Execution.Batch;
 

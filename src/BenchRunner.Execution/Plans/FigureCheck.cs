@@ -11,5 +11,5 @@ public sealed record FigureCheck(string? Name, SourceLocation Location, string T
     : PlanStep(Name, Location)
 {
     /// <inheritdoc />
-    public override string Word => PlanFileKeys.CheckFigures;
+    public override StepKind Kind => StepKinds.CheckFigures;
 }

@@ -15,5 +15,5 @@ public sealed record GeneratorSetup(string? Name, SourceLocation Location, strin
     Frequency? Frequency, Level? Level, bool? Output, SourceLocation LevelLocation) : PlanStep(Name, Location)
 {
     /// <inheritdoc />
-    public override string Word => PlanFileKeys.SetGenerator;
+    public override StepKind Kind => StepKinds.SetGenerator;
 }

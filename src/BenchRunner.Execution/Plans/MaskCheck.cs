@@ -13,5 +13,5 @@ public sealed record MaskCheck(string? Name, SourceLocation Location, string Tra
     : PlanStep(Name, Location)
 {
     /// <inheritdoc />
-    public override string Word => PlanFileKeys.CheckMask;
+    public override StepKind Kind => StepKinds.CheckMask;
 }

@@ -9,5 +9,5 @@ namespace BenchRunner.Execution.Plans;
 public sealed record MessageStep(string? Name, SourceLocation Location, string Text) : PlanStep(Name, Location)
 {
     /// <inheritdoc />
-    public override string Word => PlanFileKeys.Message;
+    public override StepKind Kind => StepKinds.Message;
 }

@@ -15,5 +15,5 @@ public sealed record NetworkAnalyserSetup(string? Name, SourceLocation Location,
     Frequency Start, Frequency Stop, int Points, Frequency? IfBandwidth) : PlanStep(Name, Location)
 {
     /// <inheritdoc />
-    public override string Word => PlanFileKeys.SetNetworkAnalyser;
+    public override StepKind Kind => StepKinds.SetNetworkAnalyser;
 }

@@ -38,5 +38,5 @@ public sealed record OverloadCheckStep(
     public const double DefaultToleranceDb = 1;
 
     /// <inheritdoc />
-    public override string Word => PlanFileKeys.CheckOverload;
+    public override StepKind Kind => StepKinds.CheckOverload;
 }

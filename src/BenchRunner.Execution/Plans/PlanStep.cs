@@ -7,6 +7,9 @@ namespace BenchRunner.Execution.Plans;
 /// <param name="Location">Where the step starts in the plan file.</param>
 public abstract record PlanStep(string? Name, SourceLocation Location)
 {
+    /// <summary>What kind of step it is.</summary>
+    public abstract StepKind Kind { get; }
+
     /// <summary>The step's word in the plan file, e.g. <c>sweep</c>.</summary>
-    public abstract string Word { get; }
+    public string Word => Kind.Word;
 }

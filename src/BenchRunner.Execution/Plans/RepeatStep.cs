@@ -16,5 +16,5 @@ public sealed record RepeatStep(string? Name, SourceLocation Location, int? Time
     IReadOnlyList<PlanStep> Steps) : PlanStep(Name, Location)
 {
     /// <inheritdoc />
-    public override string Word => PlanFileKeys.Repeat;
+    public override StepKind Kind => StepKinds.Repeat;
 }

@@ -17,5 +17,5 @@ public sealed record SpectrumAnalyserSetup(string? Name, SourceLocation Location
     Frequency Start, Frequency Stop, Frequency? Rbw, Ratio? Attenuation, Level? ReferenceLevel) : PlanStep(Name, Location)
 {
     /// <inheritdoc />
-    public override string Word => PlanFileKeys.SetSpectrumAnalyser;
+    public override StepKind Kind => StepKinds.SetSpectrumAnalyser;
 }

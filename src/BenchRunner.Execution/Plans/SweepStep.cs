@@ -11,5 +11,5 @@ public sealed record SweepStep(string? Name, SourceLocation Location, string Rol
     : PlanStep(Name, Location)
 {
     /// <inheritdoc />
-    public override string Word => PlanFileKeys.Sweep;
+    public override StepKind Kind => StepKinds.Sweep;
 }

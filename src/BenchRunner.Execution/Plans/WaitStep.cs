@@ -9,5 +9,5 @@ namespace BenchRunner.Execution.Plans;
 public sealed record WaitStep(string? Name, SourceLocation Location, TimeSpan Duration) : PlanStep(Name, Location)
 {
     /// <inheritdoc />
-    public override string Word => PlanFileKeys.Wait;
+    public override StepKind Kind => StepKinds.Wait;
 }

@@ -3,6 +3,7 @@ using BenchRunner.Core.Figures;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;
 using BenchRunner.Execution.Plans;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Execution.Running;
 

@@ -1,4 +1,6 @@
 using System.Text.Json.Nodes;
+using BenchRunner.Core.Runs;
+using BenchRunner.Core.Validity;
 
 namespace BenchRunner.Execution.Running;
 

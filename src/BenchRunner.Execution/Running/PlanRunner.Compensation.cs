@@ -3,6 +3,7 @@ using BenchRunner.Core.Traces;
 using BenchRunner.Core.Validity;
 using BenchRunner.Execution.Bench;
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Execution.Running;
 
@@ -14,7 +15,7 @@ public sealed partial class PlanRunner
     /// the line to store with it, and the flags: uncalibrated (and the raw trace) when the compensation
     /// cannot be applied, e.g. a point outside the cable table.
     /// </summary>
-    private (PowerTrace Trace, string Compensation, SweepFlags Flags) Compensate(string role, PowerTrace raw, RunState state)
+    private async ValueTask<(PowerTrace Trace, string Compensation, SweepFlags Flags)> CompensateAsync(string role, PowerTrace raw, RunState state)
     {
         if (_bench.CompensationOf(role) is not { } compensation)
         {
@@ -27,7 +28,7 @@ public sealed partial class PlanRunner
             return (applied.Value, compensation.Description, SweepFlags.None);
         }
 
-        state.Emit(now => new OperatorMessage(now, $"{role}: levels NOT compensated: {applied.Reason}"));
+        await state.EmitAsync(now => new OperatorMessage(now, $"{role}: levels NOT compensated: {applied.Reason}")).ConfigureAwait(false);
         return (raw, $"not compensated: {applied.Reason}", SweepFlags.Uncalibrated);
     }
 

@@ -6,6 +6,7 @@ using BenchRunner.Core.Validity;
 using BenchRunner.Execution.Plans;
 using BenchRunner.Instruments.Capabilities;
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Execution.Running;
 
@@ -32,8 +33,8 @@ public sealed partial class PlanRunner
         var higherRaw = await analyser.AcquireAsync(cancellationToken).ConfigureAwait(false);
         await analyser.ConfigureAsync(settings, cancellationToken).ConfigureAwait(false);
 
-        var (lower, compensation, lowerFlags) = Compensate(step.Role, lowerRaw, state);
-        var (higher, _, higherFlags) = Compensate(step.Role, higherRaw, state);
+        var (lower, compensation, lowerFlags) = await CompensateAsync(step.Role, lowerRaw, state).ConfigureAwait(false);
+        var (higher, _, higherFlags) = await CompensateAsync(step.Role, higherRaw, state).ConfigureAwait(false);
         var options = new OverloadCheckOptions
         {
             Threshold = step.Threshold,
@@ -45,8 +46,8 @@ public sealed partial class PlanRunner
         bool overloaded = lines.Any(l => l.IsAnalyserMade || l.Class == OverloadClass.ChangedOtherwise);
 
         var traceName = step.Trace.Name;
-        Keep(step.Role, traceName, lower, FigureSummary.ForSpectrum(lower), name, state, lowerFlags | OverloadFlag(overloaded), compensation);
-        Keep(step.Role, traceName + RaisedTraceSuffix, higher, FigureSummary.ForSpectrum(higher), name, state, higherFlags, compensation);
+        await KeepAsync(step.Role, traceName, lower, FigureSummary.ForSpectrum(lower), name, state, lowerFlags | OverloadFlag(overloaded), compensation).ConfigureAwait(false);
+        await KeepAsync(step.Role, traceName + RaisedTraceSuffix, higher, FigureSummary.ForSpectrum(higher), name, state, higherFlags, compensation).ConfigureAwait(false);
         if (overloaded)
         {
             state.OverloadedTraces.Add(traceName);
@@ -56,7 +57,7 @@ public sealed partial class PlanRunner
         var result = verdict.IsAvailable
             ? new CheckResult(name, what, !lines.Any(l => l.Relied && l.IsAnalyserMade), Describe(step, lines, MissingLines(step, lines, options)), null, null) { Lines = lines }
             : new CheckResult(name, what, false, $"could not be judged: {verdict.Reason}", null, null);
-        state.Record(_store, result, state.SweepIdOf(traceName), kind: CheckKind.Overload, detailJson: DetailJson(step, raised, lines, compensation));
+        await state.RecordAsync(result with { Kind = CheckKind.Overload, Trace = traceName, DetailJson = DetailJson(step, raised, lines, compensation) }).ConfigureAwait(false);
     }
 
     private static SweepFlags OverloadFlag(bool overloaded) => overloaded ? SweepFlags.Overloaded : SweepFlags.None;

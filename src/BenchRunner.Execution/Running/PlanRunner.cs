@@ -1,4 +1,3 @@
-using System.Globalization;
 using BenchRunner.Core.Figures;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;
@@ -11,8 +10,8 @@ using BenchRunner.Instruments.Connections;
 using BenchRunner.Instruments.Errors;
 using BenchRunner.Instruments.Profiles;
 using BenchRunner.Instruments.Resilience;
-using BenchRunner.Storage;
-using BenchRunner.Storage.Sqlite;
+using BenchRunner.Execution.Events;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Execution.Running;
 
@@ -34,90 +33,93 @@ public sealed partial class PlanRunner
 
     private readonly BenchDefinition _bench;
     private readonly TransportFactory _transports;
-    private readonly SqliteResultStore? _store;
     private readonly TimeProvider _time;
     private readonly InstrumentResilienceOptions _resilience;
 
     /// <summary>Creates a runner for <paramref name="bench"/>.</summary>
     /// <param name="bench">The bench the plan runs on.</param>
     /// <param name="transports">Creates the connections the bench names (with <c>sim:</c> registered for the virtual bench).</param>
-    /// <param name="store">Where runs are recorded, or null to record nothing.</param>
     /// <param name="time">The clock for waits, timeouts and timestamps.</param>
     /// <param name="resilience">Timeouts, retries and breaker; defaults when null.</param>
-    public PlanRunner(BenchDefinition bench, TransportFactory transports, SqliteResultStore? store = null,
-        TimeProvider? time = null, InstrumentResilienceOptions? resilience = null)
+    public PlanRunner(BenchDefinition bench, TransportFactory transports, TimeProvider? time = null, InstrumentResilienceOptions? resilience = null)
     {
         _bench = bench ?? throw new ArgumentNullException(nameof(bench));
         _transports = transports ?? throw new ArgumentNullException(nameof(transports));
-        _store = store;
         _time = time ?? TimeProvider.System;
         _resilience = resilience ?? new InstrumentResilienceOptions();
     }
 
-    /// <summary>Runs <paramref name="plan"/> and returns how it ended; instrument failures end it with <see cref="RunStatus.Error"/>.</summary>
-    public Task<RunOutcome> RunAsync(TestPlan plan, RunContext context, IRunObserver? observer, CancellationToken cancellationToken) =>
-        RunCoreAsync(plan, context, observer, again: null, cancellationToken);
+    /// <summary>The bench the runner runs on.</summary>
+    public BenchDefinition Bench => _bench;
+
+    /// <summary>
+    /// Runs <paramref name="plan"/>, publishing every event into <paramref name="events"/>, and returns how it ended;
+    /// instrument failures end it with <see cref="RunStatus.Error"/>. The outcome's run id is null: ids belong to the recorder.
+    /// </summary>
+    public Task<RunOutcome> RunAsync(TestPlan plan, RunContext context, RunEventPipeline events, CancellationToken cancellationToken) =>
+        RunCoreAsync(plan, context, events, again: null, cancellationToken);
 
     /// <summary>
     /// Runs <paramref name="plan"/> as one run of many passes: the steps before its first sweep (or overload check, or
     /// repeat block) once, then the remaining steps again and again while <paramref name="again"/>,
-    /// called after each pass with the pass number (1, 2, ...), returns true. Every sweep and check
-    /// of every pass is recorded in the one run; the verdict is that of the last pass.
+    /// called after each pass with what the pass acquired and judged, returns true. Every sweep and check
+    /// of every pass belongs to the one run; the verdict is that of the last pass.
     /// </summary>
-    public Task<RunOutcome> RunRepeatedlyAsync(TestPlan plan, RunContext context, IRunObserver? observer,
-        Func<int, CancellationToken, ValueTask<bool>> again, CancellationToken cancellationToken)
+    public Task<RunOutcome> RunRepeatedlyAsync(TestPlan plan, RunContext context, RunEventPipeline events,
+        Func<RunPass, CancellationToken, ValueTask<bool>> again, CancellationToken cancellationToken)
     {
         ArgumentNullException.ThrowIfNull(again);
-        return RunCoreAsync(plan, context, observer, again, cancellationToken);
+        return RunCoreAsync(plan, context, events, again, cancellationToken);
     }
 
-    private async Task<RunOutcome> RunCoreAsync(TestPlan plan, RunContext context, IRunObserver? observer,
-        Func<int, CancellationToken, ValueTask<bool>>? again, CancellationToken cancellationToken)
+    private async Task<RunOutcome> RunCoreAsync(TestPlan plan, RunContext context, RunEventPipeline events,
+        Func<RunPass, CancellationToken, ValueTask<bool>>? again, CancellationToken cancellationToken)
     {
         ArgumentNullException.ThrowIfNull(plan);
         ArgumentNullException.ThrowIfNull(context);
-        var state = new RunState(observer ?? NullObserver.Instance, _time);
-        long? runId = _store?.StartRun(new RunRecord(context.Mode, plan.Name, context.PlanText, context.SoftwareVersion, context.Host)
-        {
-            BenchName = _bench.Name,
-            BenchText = context.BenchText,
-            Operator = context.Operator,
-            DutSerial = context.DutSerial,
-            Lot = context.Lot,
-            IsRetest = context.IsRetest,
-            ExtraJson = PlanLimits.From(plan).ToRunJson(),
-        });
-        state.RunId = runId;
-        state.Emit(now => new RunStarted(now, runId, plan.Name));
+        ArgumentNullException.ThrowIfNull(events);
+        using var state = new RunState(events, _time, cancellationToken, context.StopAtNextStep);
         try
         {
+            await state.EmitAsync(now => new RunStarted(now, Header(plan, context))).ConfigureAwait(false);
             foreach (var role in plan.Roles)
             {
                 await ConnectAsync(role.Role, state, cancellationToken).ConfigureAwait(false);
             }
 
             int once = again is null ? 0 : OnceStepCount(plan.Steps);
-            await RunStepsAsync([.. plan.Steps.Take(once)], state, cancellationToken).ConfigureAwait(false);
+            await RunStepsAsync([.. plan.Steps.Take(once)], state).ConfigureAwait(false);
             IReadOnlyList<PlanStep> body = [.. plan.Steps.Skip(once)];
             int pass = 0, passStart;
+            bool more;
             do
             {
                 passStart = state.Checks.Count;
+                state.PassTraces = [];
                 pass++;
-                await RunStepsAsync(body, state, cancellationToken).ConfigureAwait(false);
+                await RunStepsAsync(body, state).ConfigureAwait(false);
+                more = again is not null
+                    && await again(new RunPass(pass, state.PassTraces, [.. state.Checks.Skip(passStart)]), cancellationToken).ConfigureAwait(false);
+                state.Gentle.ThrowIfCancellationRequested();
             }
-            while (again is not null && await again(pass, cancellationToken).ConfigureAwait(false));
+            while (more);
 
             var status = state.Checks.Skip(passStart).All(c => c.Passed) ? RunStatus.Passed : RunStatus.Failed;
-            return Finish(state, status, null);
+            return await FinishAsync(state, status, null).ConfigureAwait(false);
         }
-        catch (OperationCanceledException) when (cancellationToken.IsCancellationRequested)
+        catch (OperationCanceledException) when (state.Stopping)
         {
-            return Finish(state, RunStatus.Stopped, context.StopReason?.Invoke() is { } reason && !string.IsNullOrWhiteSpace(reason) ? reason : StoppedByOperator);
+            var reason = context.StopReason?.Invoke() is { } r && !string.IsNullOrWhiteSpace(r) ? r : StoppedByOperator;
+            return await FinishAsync(state, RunStatus.Stopped, reason).ConfigureAwait(false);
+        }
+        catch (RunListenerFailedException ex)
+        {
+            // The recorder is gone, so the end cannot be recorded; the next opening of the store marks the run interrupted.
+            return new RunOutcome(null, RunStatus.Error, state.Checks, ex.Message);
         }
         catch (Exception ex) when (ex is InstrumentException or SafetyRefusedException or IOException)
         {
-            return Finish(state, RunStatus.Error, ex.Message);
+            return await FinishAsync(state, RunStatus.Error, ex.Message).ConfigureAwait(false);
         }
         finally
         {
@@ -128,20 +130,36 @@ public sealed partial class PlanRunner
         }
     }
 
+    private RunHeader Header(TestPlan plan, RunContext context) =>
+        new(context.Mode, plan.Name, context.PlanText, context.SoftwareVersion, context.Host)
+        {
+            BenchName = _bench.Name,
+            BenchText = context.BenchText,
+            Operator = context.Operator,
+            DutSerial = context.DutSerial,
+            Lot = context.Lot,
+            IsRetest = context.IsRetest,
+            LimitsJson = PlanLimits.From(plan).ToRunJson(),
+        };
+
     private static int OnceStepCount(IReadOnlyList<PlanStep> steps)
     {
         int first = steps.ToList().FindIndex(s => s is SweepStep or RepeatStep or OverloadCheckStep);
         return first < 0 ? 0 : first;
     }
 
-    private RunOutcome Finish(RunState state, RunStatus status, string? error)
+    private static async Task<RunOutcome> FinishAsync(RunState state, RunStatus status, string? error)
     {
-        if (state.RunId is { } id)
+        try
         {
-            _store!.FinishRun(id, status, error);
+            await state.EmitAsync(now => new RunEnded(now, status, error)).ConfigureAwait(false);
+        }
+        catch (RunListenerFailedException ex)
+        {
+            return new RunOutcome(null, RunStatus.Error, state.Checks, ex.Message);
         }
 
-        return new RunOutcome(state.RunId, status, state.Checks, error);
+        return new RunOutcome(null, status, state.Checks, error);
     }
 
     private async Task ConnectAsync(string role, RunState state, CancellationToken cancellationToken)
@@ -153,76 +171,85 @@ public sealed partial class PlanRunner
         state.Instruments[role] = instrument;
         await instrument.ConnectAsync(cancellationToken).ConfigureAwait(false);
         var id = instrument.Identity;
-        if (state.RunId is { } runId)
+        await state.EmitAsync(now => new InstrumentConnected(now, role, InstrumentKindWords.Of(declared.Kind), id.Maker, id.Model, id.Serial, id.Firmware)
         {
-            _store!.AddInstrument(runId, new InstrumentRecord(role, KindWord(declared.Kind), id.Maker, id.Model, id.Serial, id.Firmware)
-            {
-                Connection = declared.Connection.ToString(),
-                CompensationJson = _bench.CompensationOf(role)?.ToJson(),
-            });
-        }
+            Connection = declared.Connection.ToString(),
+            CompensationJson = _bench.CompensationOf(role)?.ToJson(),
+        }).ConfigureAwait(false);
     }
 
-    private async Task RunStepsAsync(IReadOnlyList<PlanStep> steps, RunState state, CancellationToken cancellationToken)
+    private async Task RunStepsAsync(IReadOnlyList<PlanStep> steps, RunState state)
     {
         foreach (var step in steps)
         {
-            cancellationToken.ThrowIfCancellationRequested();
+            // A gentle stop takes effect here, between steps: a step that drives an instrument has finished.
+            state.Hard.ThrowIfCancellationRequested();
+            state.Gentle.ThrowIfCancellationRequested();
             var name = step.Name ?? step.Word;
-            state.Emit(now => new StepStarted(now, name, step.Word));
-            switch (step)
-            {
-                case NetworkAnalyserSetup na:
-                    await Capability<INetworkAnalyser>(state, na.Role).ConfigureSweepAsync(
-                        new NetworkSweep(na.Start, na.Stop, na.Points, na.IfBandwidth), cancellationToken).ConfigureAwait(false);
-                    break;
-                case SpectrumAnalyserSetup sa:
-                    await Capability<ISpectrumAnalyser>(state, sa.Role).ConfigureAsync(state.SpectrumSettings[sa.Role] = new SpectrumSettings(
-                        FrequencyRange.Between(sa.Start, sa.Stop),
-                        sa.Rbw ?? Frequency.FromKilohertz(10),
-                        sa.Attenuation ?? Ratio.FromDecibels(10),
-                        sa.ReferenceLevel ?? Level.FromDbm(0)), cancellationToken).ConfigureAwait(false);
-                    break;
-                case GeneratorSetup gen:
-                    await SetGeneratorAsync(gen, state, cancellationToken).ConfigureAwait(false);
-                    break;
-                case SweepStep sweep:
-                    await SweepAsync(sweep, name, state, cancellationToken).ConfigureAwait(false);
-                    break;
-                case MaskCheck mask:
-                    CheckMask(mask, name, state);
-                    break;
-                case FigureCheck figures:
-                    foreach (var limit in figures.Limits)
-                    {
-                        state.Record(_store, CheckJudge.Figure(figures.Trace, limit, name, state.Traces[figures.Trace].Figures), state.SweepIdOf(figures.Trace), trace: figures.Trace);
-                    }
-
-                    break;
-                case WaitStep wait:
-                    await Task.Delay(wait.Duration, _time, cancellationToken).ConfigureAwait(false);
-                    break;
-                case MessageStep message:
-                    state.Emit(now => new OperatorMessage(now, message.Text));
-                    break;
-                case OverloadCheckStep overload:
-                    await CheckOverloadAsync(overload, name, state, cancellationToken).ConfigureAwait(false);
-                    break;
-                case RepeatStep repeat:
-                    await RepeatAsync(repeat, name, state, cancellationToken).ConfigureAwait(false);
-                    break;
-                default:
-                    throw new NotSupportedException($"{step.Location}: the runner cannot carry out a \"{step.Word}\" step.");
-            }
+            await state.EmitAsync(now => new StepStarted(now, name, step.Word, step.Kind.DrivesInstrument)).ConfigureAwait(false);
+            await RunStepAsync(step, name, state, step.Kind.DrivesInstrument ? state.Hard : state.Either).ConfigureAwait(false);
+            await state.EmitAsync(now => new StepEnded(now, name, step.Word)).ConfigureAwait(false);
         }
     }
 
-    private async Task RepeatAsync(RepeatStep repeat, string name, RunState state, CancellationToken cancellationToken)
+    private async Task RunStepAsync(PlanStep step, string name, RunState state, CancellationToken cancellationToken)
+    {
+        switch (step)
+        {
+            case NetworkAnalyserSetup na:
+                await Capability<INetworkAnalyser>(state, na.Role).ConfigureSweepAsync(
+                    new NetworkSweep(na.Start, na.Stop, na.Points, na.IfBandwidth), cancellationToken).ConfigureAwait(false);
+                break;
+            case SpectrumAnalyserSetup sa:
+                await Capability<ISpectrumAnalyser>(state, sa.Role).ConfigureAsync(state.SpectrumSettings[sa.Role] = new SpectrumSettings(
+                    FrequencyRange.Between(sa.Start, sa.Stop),
+                    sa.Rbw ?? Frequency.FromKilohertz(10),
+                    sa.Attenuation ?? Ratio.FromDecibels(10),
+                    sa.ReferenceLevel ?? Level.FromDbm(0)), cancellationToken).ConfigureAwait(false);
+                break;
+            case GeneratorSetup gen:
+                await SetGeneratorAsync(gen, state, cancellationToken).ConfigureAwait(false);
+                break;
+            case SweepStep sweep:
+                await SweepAsync(sweep, name, state, cancellationToken).ConfigureAwait(false);
+                break;
+            case MaskCheck mask:
+                await CheckMaskAsync(mask, name, state).ConfigureAwait(false);
+                break;
+            case FigureCheck figures:
+                foreach (var limit in figures.Limits)
+                {
+                    await state.RecordAsync(CheckJudge.Figure(figures.Trace, limit, name, state.Traces[figures.Trace].Figures) with { Trace = figures.Trace })
+                        .ConfigureAwait(false);
+                }
+
+                break;
+            case WaitStep wait:
+                await Task.Delay(wait.Duration, _time, cancellationToken).ConfigureAwait(false);
+                break;
+            case MessageStep message:
+                await state.EmitAsync(now => new OperatorMessage(now, message.Text)).ConfigureAwait(false);
+                break;
+            case OverloadCheckStep overload:
+                await CheckOverloadAsync(overload, name, state, cancellationToken).ConfigureAwait(false);
+                break;
+            case RepeatStep repeat:
+                await RepeatAsync(repeat, name, state).ConfigureAwait(false);
+                break;
+            case IInstrumentStep custom:
+                await custom.RunAsync(new StepServices(name, state, this), cancellationToken).ConfigureAwait(false);
+                break;
+            default:
+                throw new NotSupportedException($"{step.Location}: the runner cannot carry out a \"{step.Word}\" step.");
+        }
+    }
+
+    private async Task RepeatAsync(RepeatStep repeat, string name, RunState state)
     {
         int limit = repeat.Times ?? repeat.AtMost;
         for (int pass = 1; pass <= limit; pass++)
         {
-            await RunStepsAsync(repeat.Steps, state, cancellationToken).ConfigureAwait(false);
+            await RunStepsAsync(repeat.Steps, state).ConfigureAwait(false);
             if (repeat.Until is { } until && until.Limits.All(l => CheckJudge.Figure(until.Trace, l, name, state.Traces[until.Trace].Figures).Passed))
             {
                 return;
@@ -232,8 +259,8 @@ public sealed partial class PlanRunner
         if (repeat.Until is { } condition)
         {
             var detail = string.Join(", ", condition.Limits.Select(l => l.Key));
-            state.Record(_store, new CheckResult(name, $"repeat until {detail} of {condition.Trace}", false,
-                $"the condition did not hold within {limit} passes", null, null), null);
+            await state.RecordAsync(new CheckResult(name, $"repeat until {detail} of {condition.Trace}", false,
+                $"the condition did not hold within {limit} passes", null, null)).ConfigureAwait(false);
         }
     }
 
@@ -282,53 +309,39 @@ public sealed partial class PlanRunner
             var traces = await vna.AcquireAsync(step.Traces.Select(t => t.Quantity).ToList(), cancellationToken).ConfigureAwait(false);
             for (int i = 0; i < traces.Count; i++)
             {
-                Keep(step.Role, step.Traces[i].Name, traces[i], FigureSummary.ForFilter(traces[i]), name, state);
+                await KeepAsync(step.Role, step.Traces[i].Name, traces[i], FigureSummary.ForFilter(traces[i]), name, state).ConfigureAwait(false);
             }
         }
         else
         {
             var raw = await Capability<ISpectrumAnalyser>(state, step.Role).AcquireAsync(cancellationToken).ConfigureAwait(false);
-            var (power, compensation, flags) = Compensate(step.Role, raw, state);
-            Keep(step.Role, step.Traces.Single().Name, power, FigureSummary.ForSpectrum(power), name, state, flags, compensation);
+            var (power, compensation, flags) = await CompensateAsync(step.Role, raw, state).ConfigureAwait(false);
+            await KeepAsync(step.Role, step.Traces.Single().Name, power, FigureSummary.ForSpectrum(power), name, state, flags, compensation).ConfigureAwait(false);
         }
     }
 
-    private void Keep(string role, string traceName, Trace trace, IReadOnlyList<NamedFigure> figures, string step, RunState state,
+    private ValueTask KeepAsync(string role, string traceName, Trace trace, IReadOnlyList<NamedFigure> figures, string step, RunState state,
         SweepFlags flags = SweepFlags.None, string? compensation = null)
     {
         state.Traces[traceName] = (trace, figures);
+        state.PassTraces[traceName] = (trace, figures);
         state.OverloadedTraces.Remove(traceName);
-        if (state.RunId is { } runId)
+        return state.EmitAsync(now => new SweepAcquired(now, role, traceName, trace, figures)
         {
-            state.SweepIds[traceName] = _store!.AddSweep(runId, new SweepRecord(step, trace)
-            {
-                InstrumentRole = role,
-                TraceName = traceName,
-                Figures = figures,
-                AcquiredUtc = _time.GetUtcNow(),
-                Flags = flags,
-                Compensation = compensation,
-            });
-        }
-
-        state.Emit(now => new SweepAcquired(now, role, traceName, trace, figures));
+            Step = step,
+            Flags = flags,
+            Compensation = compensation,
+        });
     }
 
-    private void CheckMask(MaskCheck step, string name, RunState state)
+    private ValueTask CheckMaskAsync(MaskCheck step, string name, RunState state)
     {
         var (trace, _) = state.Traces[step.Trace];
         var (result, worstAt) = CheckJudge.Mask(step, name, trace);
-        state.Record(_store, result, state.SweepIdOf(step.Trace), worstAt, CheckKind.Mask, step.Trace);
+        return state.RecordAsync(result with { Kind = CheckKind.Mask, Trace = step.Trace, WorstAt = worstAt });
     }
 
-    private static T Capability<T>(RunState state, string role) where T : class =>
+    internal static T Capability<T>(RunState state, string role) where T : class =>
         state.Instruments[role].GetCapability<T>()
         ?? throw new InstrumentException($"the instrument's profile gives it no {typeof(T).Name[1..]} capability", isTransient: false) { Instrument = role };
-
-    private static string KindWord(InstrumentKind kind) => kind switch
-    {
-        InstrumentKind.NetworkAnalyser => "network-analyser",
-        InstrumentKind.SpectrumAnalyser => "spectrum-analyser",
-        _ => "signal-generator",
-    };
 }

@@ -1,4 +1,5 @@
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Execution.Running;
 
@@ -30,4 +31,15 @@ public sealed record RunContext(string PlanText, string? BenchText, string Softw
     /// records <see cref="PlanRunner.StoppedByOperator"/>.
     /// </summary>
     public Func<string?>? StopReason { get; init; }
+
+    /// <summary>
+    /// A gentle stop: when cancelled, the run stops at the next step boundary. A step that drives an
+    /// instrument (<see cref="Plans.StepKind.DrivesInstrument"/>) finishes first, so a sweep in flight is
+    /// completed and kept; a wait or any other step ends at once. The token given to the run itself
+    /// cuts it short at once. None by default.
+    /// </summary>
+    public CancellationToken StopAtNextStep { get; init; }
+
+    /// <summary>Told the run's id in the result store as soon as its start is recorded (a status board, a log), or null.</summary>
+    public Action<long>? Recorded { get; init; }
 }

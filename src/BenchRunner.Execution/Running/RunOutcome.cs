@@ -1,4 +1,5 @@
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Execution.Running;
 

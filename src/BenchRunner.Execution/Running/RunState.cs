@@ -1,25 +1,36 @@
 using BenchRunner.Core.Figures;
-using BenchRunner.Core.Quantities;
+using BenchRunner.Core.Runs;
 using BenchRunner.Core.Traces;
+using BenchRunner.Execution.Events;
 using BenchRunner.Instruments.Capabilities;
 using BenchRunner.Instruments.Resilience;
-using BenchRunner.Storage;
-using BenchRunner.Storage.Sqlite;
 
 namespace BenchRunner.Execution.Running;
 
-/// <summary>What one run has so far: its instruments, its named traces and their figures, its checks.</summary>
-internal sealed class RunState(IRunObserver observer, TimeProvider time)
+/// <summary>What one run has so far: its instruments, its named traces and their figures, its checks; and where its events go.</summary>
+internal sealed class RunState(RunEventPipeline events, TimeProvider time, CancellationToken hard, CancellationToken gentle) : IDisposable
 {
-    public long? RunId { get; set; }
+    private readonly CancellationTokenSource _either = CancellationTokenSource.CreateLinkedTokenSource(hard, gentle);
+
+    /// <summary>Cuts the run short at once (the operator's Ctrl+C, the end of a stop's bound).</summary>
+    public CancellationToken Hard => hard;
+
+    /// <summary>Stops the run at the next step; a step that drives an instrument finishes first.</summary>
+    public CancellationToken Gentle => gentle;
+
+    /// <summary>For steps that drive no instrument: either stop ends them at once.</summary>
+    public CancellationToken Either => _either.Token;
+
+    public bool Stopping => hard.IsCancellationRequested || gentle.IsCancellationRequested;
 
     public Dictionary<string, ResilientInstrument> Instruments { get; } = [];
 
     public Dictionary<string, (Trace Trace, IReadOnlyList<NamedFigure> Figures)> Traces { get; } = [];
 
-    public Dictionary<string, long> SweepIds { get; } = [];
-
     public List<CheckResult> Checks { get; } = [];
+
+    /// <summary>The traces acquired in the current pass, for <see cref="PlanRunner.RunRepeatedlyAsync"/>.</summary>
+    public Dictionary<string, (Trace Trace, IReadOnlyList<NamedFigure> Figures)> PassTraces { get; set; } = [];
 
     /// <summary>The settings last given to each spectrum analyser, by role.</summary>
     public Dictionary<string, SpectrumSettings> SpectrumSettings { get; } = [];
@@ -27,33 +38,18 @@ internal sealed class RunState(IRunObserver observer, TimeProvider time)
     /// <summary>The traces an overload check found made partly by the analyser itself; checks on them are flagged.</summary>
     public HashSet<string> OverloadedTraces { get; } = [];
 
-    public long? SweepIdOf(string traceName) => SweepIds.TryGetValue(traceName, out var id) ? id : null;
+    public ValueTask EmitAsync(Func<DateTimeOffset, RunEvent> create) => events.PublishAsync(create(time.GetUtcNow()));
 
-    public void Emit(Func<DateTimeOffset, RunEvent> create) => observer.OnEvent(create(time.GetUtcNow()));
-
-    public void Record(SqliteResultStore? store, CheckResult result, long? sweepId, Frequency? worstAt = null, CheckKind kind = CheckKind.FigureLimit,
-        string? trace = null, string? detailJson = null)
+    public ValueTask RecordAsync(CheckResult result)
     {
-        if (trace is not null && OverloadedTraces.Contains(trace))
+        if (result.Trace is { } trace && OverloadedTraces.Contains(trace))
         {
             result = result with { TraceOverloaded = true, Detail = $"{result.Detail}; {CheckResult.OverloadedNote}" };
         }
 
         Checks.Add(result);
-        if (RunId is { } runId && store is not null)
-        {
-            store.AddCheck(runId, new CheckRecord(result.Name, kind, result.Passed)
-            {
-                SweepId = sweepId,
-                Margin = result.Margin,
-                MarginUnit = result.MarginUnit,
-                WorstFrequency = worstAt,
-                Message = result.Detail,
-                Flags = result.TraceOverloaded ? CheckFlags.TraceOverloaded : CheckFlags.None,
-                DetailJson = detailJson,
-            });
-        }
-
-        Emit(now => new CheckCompleted(now, result));
+        return EmitAsync(now => new CheckCompleted(now, result));
     }
+
+    public void Dispose() => _either.Dispose();
 }

@@ -3,6 +3,7 @@ using BenchRunner.Core.Traces;
 using BenchRunner.Execution.Plans;
 using BenchRunner.Execution.Running;
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Execution.Tuning;
 
@@ -15,16 +16,16 @@ namespace BenchRunner.Execution.Tuning;
 /// </summary>
 public sealed class TuningSession
 {
-    private readonly PlanRunner _runner;
+    private readonly RunLauncher _runner;
     private readonly TimeProvider _time;
     private readonly TuningOptions _options;
 
     /// <summary>Creates a session that sweeps through <paramref name="runner"/>.</summary>
-    /// <param name="runner">The runner, with its bench, connections and result store.</param>
+    /// <param name="runner">The runner with its result writer.</param>
     /// <param name="options">Pacing, settling and ending; defaults when null.</param>
     /// <param name="time">The clock for pacing and settling: the runner's own clock. The system clock when null.</param>
     /// <exception cref="ArgumentException">Options out of range (every problem named).</exception>
-    public TuningSession(PlanRunner runner, TuningOptions? options = null, TimeProvider? time = null)
+    public TuningSession(RunLauncher runner, TuningOptions? options = null, TimeProvider? time = null)
     {
         _runner = runner ?? throw new ArgumentNullException(nameof(runner));
         _options = options ?? new TuningOptions();
@@ -41,24 +42,25 @@ public sealed class TuningSession
     /// <param name="plan">The plan: its steps up to the first sweep run once, the rest every sweep.</param>
     /// <param name="context">What is recorded with the run; its mode is set to <see cref="RunMode.Tuning"/>.</param>
     /// <param name="observer">Told of every sweep.</param>
-    /// <param name="runObserver">Told of the runner's own events (steps, sweeps, checks), or null.</param>
+    /// <param name="listeners">Told of the runner's own events (steps, sweeps, checks), or null.</param>
     /// <param name="cancellationToken">Stops the session.</param>
     public async Task<TuningOutcome> RunAsync(TestPlan plan, RunContext context, ITuningObserver observer,
-        IRunObserver? runObserver, CancellationToken cancellationToken)
+        IEnumerable<RunSubscription>? listeners, CancellationToken cancellationToken)
     {
         ArgumentNullException.ThrowIfNull(plan);
         ArgumentNullException.ThrowIfNull(context);
         ArgumentNullException.ThrowIfNull(observer);
         var targets = TuningTargets.From(plan);
         var detector = new SettleDetector(_options.Settle, _time);
-        var collector = new PassCollector(runObserver);
         long started = _time.GetTimestamp();
         long passStarted = started;
         TuningPass? last = null;
 
-        async ValueTask<bool> Again(int sweep, CancellationToken token)
+        async ValueTask<bool> Again(RunPass pass, CancellationToken token)
         {
-            var (traces, failed) = collector.TakePass();
+            int sweep = pass.Number;
+            var traces = pass.Traces;
+            var failed = pass.Checks.Where(c => !c.Passed).Select(c => c.Name).ToList();
             Trace? trace = targets.Trace is { } name && traces.TryGetValue(name, out var t) ? t.Trace : null;
             var mask = trace is not null ? targets.MaskStep?.Mask.Evaluate(trace) : null;
             var figures = targets.Figures(traces.ToDictionary(kv => kv.Key, kv => kv.Value.Figures), mask, last?.Figures);
@@ -80,38 +82,8 @@ public sealed class TuningSession
             return true;
         }
 
-        var run = await _runner.RunRepeatedlyAsync(plan, context with { Mode = RunMode.Tuning }, collector, Again, cancellationToken)
+        var run = await _runner.RunRepeatedlyAsync(plan, context with { Mode = RunMode.Tuning }, listeners, Again, cancellationToken)
             .ConfigureAwait(false);
         return new TuningOutcome(run, last?.Sweep ?? 0, detector.FirstSettledAt, last?.Settle.Settled ?? false, last);
-    }
-
-    /// <summary>Collects one pass's traces and failed checks from the runner's events, passing them on.</summary>
-    private sealed class PassCollector(IRunObserver? inner) : IRunObserver
-    {
-        private Dictionary<string, (Trace Trace, IReadOnlyList<NamedFigure> Figures)> _traces = [];
-        private List<string> _failed = [];
-
-        public void OnEvent(RunEvent runEvent)
-        {
-            switch (runEvent)
-            {
-                case SweepAcquired sweep:
-                    _traces[sweep.TraceName] = (sweep.Trace, sweep.Figures);
-                    break;
-                case CheckCompleted { Result.Passed: false } check:
-                    _failed.Add(check.Result.Name);
-                    break;
-            }
-
-            inner?.OnEvent(runEvent);
-        }
-
-        public (Dictionary<string, (Trace Trace, IReadOnlyList<NamedFigure> Figures)> Traces, List<string> Failed) TakePass()
-        {
-            var taken = (_traces, _failed);
-            _traces = [];
-            _failed = [];
-            return taken;
-        }
     }
 }

@@ -16,30 +16,6 @@ public static class PlanValidator
     /// <summary>The caution that ends every safety problem.</summary>
     public const string Caution = "never exceed an input's maximum level: lower the level, or put an attenuator in the path";
 
-    /// <summary>
-    /// Reads the plan (and the bench, when <paramref name="benchPath"/> is given) and checks them
-    /// together; problems of both files are reported at once.
-    /// </summary>
-    /// <exception cref="InputFormatException">Any problem in either file or between them.</exception>
-    public static ValidatedPlan Load(string planPath, string? benchPath)
-    {
-        ArgumentException.ThrowIfNullOrEmpty(planPath);
-        var problems = new List<InputProblem>();
-        var plan = Collect(() => PlanFile.Load(planPath), problems);
-        var bench = benchPath is null ? null : Collect(() => BenchFile.Load(benchPath), problems);
-        if (plan is not null && bench is not null)
-        {
-            problems.AddRange(CheckAgainstBench(plan, bench));
-        }
-
-        if (problems.Count > 0)
-        {
-            throw new InputFormatException(problems);
-        }
-
-        return new ValidatedPlan(plan!, bench);
-    }
-
     /// <summary>The problems between a plan and a bench, in plan order; empty when the plan can run there.</summary>
     public static IReadOnlyList<InputProblem> CheckAgainstBench(TestPlan plan, BenchDefinition bench)
     {
@@ -103,20 +79,6 @@ public static class PlanValidator
                 problems.Add(new(step.LevelLocation,
                     $"{gen.Role} level {Signed(level)} through {path.Label} ({Signed(path.Gain)}){through} reaches {Signed(reached)} at {receiver.Role}, above its declared maximum input of {Signed(maxIn)}; {Caution}"));
             }
-        }
-    }
-
-    private static T? Collect<T>(Func<T> read, List<InputProblem> problems)
-        where T : class
-    {
-        try
-        {
-            return read();
-        }
-        catch (InputFormatException ex)
-        {
-            problems.AddRange(ex.Problems);
-            return null;
         }
     }
 

@@ -7,6 +7,7 @@ using BenchRunner.Reports.Svg;
 using BenchRunner.Storage;
 using BenchRunner.Storage.Sqlite;
 using static BenchRunner.Reports.Html.Html;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Reports.Html;
 

@@ -2,6 +2,7 @@ using BenchRunner.Core.Statistics;
 using BenchRunner.Execution.LimitRecords;
 using BenchRunner.Storage;
 using BenchRunner.Storage.Sqlite;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Reports.Lots;
 

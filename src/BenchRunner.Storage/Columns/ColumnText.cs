@@ -1,4 +1,5 @@
 using BenchRunner.Core.Traces;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Storage.Columns;
 

@@ -1,3 +1,4 @@
+using BenchRunner.Core.Runs;
 namespace BenchRunner.Storage.Sqlite;
 
 /// <summary>

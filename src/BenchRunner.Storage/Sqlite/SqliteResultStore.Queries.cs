@@ -4,6 +4,7 @@ using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;
 using BenchRunner.Storage.Columns;
 using Microsoft.Data.Sqlite;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Storage.Sqlite;
 

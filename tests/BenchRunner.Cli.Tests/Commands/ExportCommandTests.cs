@@ -4,6 +4,7 @@ using BenchRunner.Core.TraceFiles;
 using BenchRunner.Core.Traces;
 using BenchRunner.Storage;
 using BenchRunner.Storage.Sqlite;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Cli.Tests.Commands;
 

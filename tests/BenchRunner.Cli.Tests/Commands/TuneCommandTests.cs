@@ -3,6 +3,7 @@ using System.Text.RegularExpressions;
 using BenchRunner.Cli.Tests.Support;
 using BenchRunner.Storage;
 using BenchRunner.Storage.Sqlite;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Cli.Tests.Commands;
 

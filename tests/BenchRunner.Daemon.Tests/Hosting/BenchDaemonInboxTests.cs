@@ -3,6 +3,7 @@ using BenchRunner.Daemon.Status;
 using BenchRunner.Daemon.Tests.Support;
 using BenchRunner.Storage;
 using BenchRunner.Storage.Sqlite;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Daemon.Tests.Hosting;
 

@@ -3,6 +3,7 @@ using BenchRunner.Daemon.Tests.Support;
 using BenchRunner.Storage;
 using BenchRunner.Storage.Sqlite;
 using Microsoft.Data.Sqlite;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Daemon.Tests.Lifecycle;
 

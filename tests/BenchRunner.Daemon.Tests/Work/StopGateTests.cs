@@ -1,5 +1,6 @@
 using BenchRunner.Daemon.Work;
 using BenchRunner.Execution.Running;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Daemon.Tests.Work;
 

@@ -10,6 +10,7 @@ using BenchRunner.Simulator.Circuits;
 using BenchRunner.Simulator.Devices;
 using BenchRunner.Storage;
 using BenchRunner.Storage.Sqlite;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Execution.Tests.Batch;
 

@@ -9,6 +9,7 @@ using BenchRunner.Simulator.Bench;
 using BenchRunner.Simulator.Generator;
 using BenchRunner.Storage;
 using BenchRunner.Storage.Sqlite;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Execution.Tests.Running;
 

@@ -3,6 +3,7 @@ using BenchRunner.Execution.Tests.Support;
 using BenchRunner.Simulator.Bench;
 using BenchRunner.Storage;
 using BenchRunner.Storage.Sqlite;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Execution.Tests.Running;
 

@@ -6,6 +6,7 @@ using BenchRunner.Simulator.Bench;
 using BenchRunner.Simulator.Devices;
 using BenchRunner.Storage;
 using BenchRunner.Storage.Sqlite;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Execution.Tests.Running;
 

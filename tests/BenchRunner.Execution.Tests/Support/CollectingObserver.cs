@@ -1,4 +1,5 @@
 using BenchRunner.Execution.Running;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Execution.Tests.Support;
 

@@ -11,6 +11,7 @@ using BenchRunner.Simulator.Endpoints;
 using BenchRunner.Simulator.NetworkAnalyser;
 using BenchRunner.Storage;
 using BenchRunner.Storage.Sqlite;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Execution.Tests.Tuning;
 

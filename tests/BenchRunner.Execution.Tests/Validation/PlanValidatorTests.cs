@@ -1,5 +1,6 @@
 using BenchRunner.Core.Diagnostics;
 using BenchRunner.Execution.Validation;
+using BenchRunner.Execution.Preparation;
 
 namespace BenchRunner.Execution.Tests.Validation;
 
@@ -12,7 +13,7 @@ public sealed class PlanValidatorTests
     [InlineData("lna-harmonics.yaml")]
     public void Load_Examples_ValidateAgainstTheVirtualBench(string plan)
     {
-        var validated = PlanValidator.Load(RepositoryFiles.Example("plans/" + plan), VirtualBench);
+        var validated = RunPreparation.Load(RepositoryFiles.Example("plans/" + plan), VirtualBench);
 
         Assert.NotNull(validated.Bench);
         Assert.All(validated.Plan.Roles, r => Assert.Equal(r.Kind, validated.Bench!.Instruments[r.Role].Kind));
@@ -40,7 +41,7 @@ public sealed class PlanValidatorTests
               gen -> sa: -0.4 dB
             """);
 
-        var ex = Assert.Throws<InputFormatException>(() => PlanValidator.Load(plan, bench));
+        var ex = Assert.Throws<InputFormatException>(() => RunPreparation.Load(plan, bench));
 
         // +0.5 dBm - 0.4 dB = +0.1 dBm, above 0 dBm; -5 dBm - 0.4 dB is below it (arithmetic of dB gains).
         var problem = Assert.Single(ex.Problems);
@@ -62,7 +63,7 @@ public sealed class PlanValidatorTests
               - message: hello
             """);
 
-        var ex = Assert.Throws<InputFormatException>(() => PlanValidator.Load(plan, VirtualBench));
+        var ex = Assert.Throws<InputFormatException>(() => RunPreparation.Load(plan, VirtualBench));
 
         Assert.Equal([(3, 3), (4, 3)], ex.Problems.Select(p => (p.Location.Line, p.Location.Column)));
         Assert.Contains("on the bench \"virtual-bench\" it is a network-analyser", ex.Problems[0].Detail);
@@ -76,7 +77,7 @@ public sealed class PlanValidatorTests
         var plan = dir.Write("p.yaml", "plan: p\nroles: { vna: network-analyser }\nsteps:\n  - wait: soon\n");
         var bench = dir.Write("b.yaml", "bench: b\ninstruments: { vna: { kind: network-analyser, adapter: scpi } }\n");
 
-        var ex = Assert.Throws<InputFormatException>(() => PlanValidator.Load(plan, bench));
+        var ex = Assert.Throws<InputFormatException>(() => RunPreparation.Load(plan, bench));
 
         Assert.Equal(2, ex.Problems.Count);
         Assert.EndsWith("p.yaml", ex.Problems[0].Location.File);

@@ -3,6 +3,7 @@ using BenchRunner.Reports.Html;
 using BenchRunner.Reports.Tests.Support;
 using BenchRunner.Storage;
 using static BenchRunner.Reports.Tests.Support.Xhtml;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Reports.Tests.Html;
 

@@ -1,6 +1,7 @@
 using BenchRunner.Reports.Lots;
 using BenchRunner.Reports.Tests.Support;
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Reports.Tests.Lots;
 

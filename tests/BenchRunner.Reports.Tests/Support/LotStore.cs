@@ -6,6 +6,7 @@ using BenchRunner.Execution.Plans;
 using BenchRunner.Storage;
 using BenchRunner.Storage.Sqlite;
 using Microsoft.Data.Sqlite;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Reports.Tests.Support;
 

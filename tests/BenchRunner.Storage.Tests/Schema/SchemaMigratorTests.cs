@@ -1,6 +1,7 @@
 using BenchRunner.Storage.Sqlite;
 using BenchRunner.Storage.Schema;
 using BenchRunner.Storage.Tests.Support;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Storage.Tests.Schema;
 

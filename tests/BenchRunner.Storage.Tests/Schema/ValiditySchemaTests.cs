@@ -2,6 +2,7 @@ using BenchRunner.Storage.Sqlite;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Storage.Schema;
 using BenchRunner.Storage.Tests.Support;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Storage.Tests.Schema;
 

@@ -2,6 +2,7 @@ using System.Numerics;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;
 using BenchRunner.Storage;
+using BenchRunner.Core.Runs;
 
 namespace BenchRunner.Storage.Tests.Support;
 

@@ -1,4 +1,4 @@
-namespace BenchRunner.Storage;
+namespace BenchRunner.Core.Runs;
 
 /// <summary>Where a run stands. Stored as the lower-case word (<c>running</c>, <c>passed</c>...).</summary>
 public enum RunStatus

@@ -1,4 +1,4 @@
-namespace BenchRunner.Storage;
+namespace BenchRunner.Core.Runs;
 
 /// <summary>
 /// Conditions noted with a check. Stored as the integer <c>flags</c> of a check (schema version 2

@@ -1,26 +1,34 @@
+using BenchRunner.Core.Runs;
 using BenchRunner.Daemon.Logging;
 using BenchRunner.Daemon.Status;
-using BenchRunner.Execution.Running;
 using Microsoft.Extensions.Logging;
 
 namespace BenchRunner.Daemon.Work;
 
 /// <summary>Logs a run's events (with its run id and instruments) and keeps the job's status entry current.</summary>
-internal sealed class RunLogObserver(ILogger log, PlanJob job, int attempt, StatusBoard status, TimeProvider time) : IRunObserver
+internal sealed class RunLogListener(ILogger log, PlanJob job, int attempt, StatusBoard status, TimeProvider time) : IRunListener
 {
     private readonly string _instruments = string.Join(", ", job.Instruments);
+    private long _runId = -1;
 
-    /// <summary>The run's id, once it has started (null when nothing is recorded).</summary>
-    public long? RunId { get; private set; }
+    /// <summary>The run's id in the store, once its start is recorded.</summary>
+    public long? RunId => Interlocked.Read(ref _runId) is >= 0 and var id ? id : null;
 
-    public void OnEvent(RunEvent runEvent)
+    /// <summary>Told by the recorder that the run's start is stored: logs the start with its id.</summary>
+    public void Recorded(long runId)
+    {
+        Interlocked.Exchange(ref _runId, runId);
+        DaemonLog.RunStarted(log, runId, job.Id, job.Plan.Name, _instruments, attempt);
+        status.UpdateJob(job.Id, j => j with { RunId = runId });
+    }
+
+    /// <inheritdoc/>
+    public ValueTask OnEventAsync(RunEvent runEvent, CancellationToken cancellationToken)
     {
         switch (runEvent)
         {
-            case RunStarted started:
-                RunId = started.RunId;
-                DaemonLog.RunStarted(log, started.RunId, job.Id, job.Plan.Name, _instruments, attempt);
-                status.UpdateJob(job.Id, j => j with { StartedUtc = time.GetUtcNow(), RunId = started.RunId, Attempt = attempt, WaitingFor = null });
+            case RunStarted:
+                status.UpdateJob(job.Id, j => j with { StartedUtc = time.GetUtcNow(), Attempt = attempt, WaitingFor = null });
                 break;
             case StepStarted step:
                 status.UpdateJob(job.Id, j => j with { Step = step.Step });
@@ -35,5 +43,7 @@ internal sealed class RunLogObserver(ILogger log, PlanJob job, int attempt, Stat
                 DaemonLog.OperatorMessage(log, RunId, _instruments, message.Text);
                 break;
         }
+
+        return ValueTask.CompletedTask;
     }
 }

@@ -1,4 +1,6 @@
-namespace BenchRunner.Execution.Running;
+using BenchRunner.Core.Quantities;
+
+namespace BenchRunner.Core.Runs;
 
 /// <summary>The result of one check of a run.</summary>
 /// <param name="Step">The step that made it.</param>
@@ -17,4 +19,16 @@ public sealed record CheckResult(string Step, string Name, bool Passed, string D
 
     /// <summary>For an overload check, every line it judged; empty for other checks.</summary>
     public IReadOnlyList<JudgedLine> Lines { get; init; } = [];
+
+    /// <summary>What was compared: a mask, a figure against its limit, an overload check.</summary>
+    public CheckKind Kind { get; init; } = CheckKind.FigureLimit;
+
+    /// <summary>The name of the trace judged (its latest sweep is the one the check belongs to), or null when none.</summary>
+    public string? Trace { get; init; }
+
+    /// <summary>Where the worst margin lies, for a mask check.</summary>
+    public Frequency? WorstAt { get; init; }
+
+    /// <summary>The check's particulars as JSON (e.g. every line of an overload check), or null.</summary>
+    public string? DetailJson { get; init; }
 }

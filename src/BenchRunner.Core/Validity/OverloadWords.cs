@@ -1,7 +1,7 @@
 using System.Globalization;
 using BenchRunner.Core.Validity;
 
-namespace BenchRunner.Execution.Running;
+namespace BenchRunner.Core.Validity;
 
 /// <summary>The words for overload verdicts: for people (<see cref="Describe"/>) and for JSON and the result file (<see cref="Key"/>).</summary>
 public static class OverloadWords

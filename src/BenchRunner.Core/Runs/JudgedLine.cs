@@ -1,7 +1,7 @@
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Validity;
 
-namespace BenchRunner.Execution.Running;
+namespace BenchRunner.Core.Runs;
 
 /// <summary>One line an overload check judged: where, how strong, what it is and whether the analyser made it.</summary>
 /// <param name="Frequency">Where it was found at the lower attenuation.</param>

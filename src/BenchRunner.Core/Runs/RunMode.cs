@@ -1,4 +1,4 @@
-namespace BenchRunner.Storage;
+namespace BenchRunner.Core.Runs;
 
 /// <summary>What kind of run it is. Stored as <c>single</c>, <c>tuning</c> or <c>batch</c>.</summary>
 public enum RunMode

@@ -1,4 +1,4 @@
-namespace BenchRunner.Storage;
+namespace BenchRunner.Core.Runs;
 
 /// <summary>What a check compared. Stored as <c>mask</c>, <c>figure_limit</c> or <c>overload</c>.</summary>
 public enum CheckKind

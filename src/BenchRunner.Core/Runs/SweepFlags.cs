@@ -1,4 +1,4 @@
-namespace BenchRunner.Storage;
+namespace BenchRunner.Core.Runs;
 
 /// <summary>
 /// Conditions noted with a sweep. Stored as the integer <c>flags</c>, one bit each; the bit
