@@ -63,7 +63,8 @@ public sealed class BatchSession
             throw new ArgumentException(problem, nameof(serial));
         }
 
-        bool retest = await HasVerdictAsync(clean!, cancellationToken).ConfigureAwait(false);
+        // A quick local read: a stop asked for now takes effect in the run, which records it.
+        bool retest = await HasVerdictAsync(clean!, CancellationToken.None).ConfigureAwait(false);
         var ready = await _fixture.PrepareAsync(clean!, cancellationToken).ConfigureAwait(false);
         if (!ready.Ready)
         {

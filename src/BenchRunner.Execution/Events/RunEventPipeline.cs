@@ -194,7 +194,8 @@ public sealed class RunEventPipeline : IAsyncDisposable
                     _fault = ex;
                     if (_options.Essential)
                     {
-                        _queue.Writer.TryComplete(ex);
+                        // Writers now fail at once and see the fault; what is queued is drained unseen.
+                        _queue.Writer.TryComplete();
                     }
                 }
             }

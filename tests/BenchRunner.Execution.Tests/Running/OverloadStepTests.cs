@@ -25,10 +25,10 @@ public sealed class OverloadStepTests
     /// from memory). So with 10 dB more attenuation the 2nd harmonic stays put and the 3rd falls by
     /// 20 dB, the 3 dB/dB rule.
     /// </summary>
-    private static (PlanRunner Runner, VirtualBench Bench) Create(SqliteResultStore? store, string benchFile = "bench-virtual.yaml") =>
+    private static (RunLauncher Runner, VirtualBench Bench) Create(SqliteResultStore? store, string benchFile = "bench-virtual.yaml") =>
         Create(store, BenchFile.Load(RepositoryFiles.Example(benchFile)));
 
-    private static (PlanRunner Runner, VirtualBench Bench) Create(SqliteResultStore? store, BenchDefinition definition)
+    private static (RunLauncher Runner, VirtualBench Bench) Create(SqliteResultStore? store, BenchDefinition definition)
     {
         var harmonics = new[] { GeneratorHarmonic.Of(2, Ratio.FromDecibels(-20)), GeneratorHarmonic.Of(3, Ratio.FromDecibels(-80)) };
         var bench = new VirtualBench(5, path: FixedPath.Loss(Ratio.FromDecibels(1)), generatorOptions: new SignalGeneratorOptions { Harmonics = harmonics });

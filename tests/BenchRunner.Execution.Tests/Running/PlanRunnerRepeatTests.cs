@@ -22,8 +22,10 @@ public sealed class PlanRunnerRepeatTests
         var outcome = await runner.RunRepeatedlyAsync(plan, VirtualRuns.Context() with { Mode = RunMode.Tuning }, observer,
             (pass, _) =>
             {
-                passes.Add(pass);
-                return ValueTask.FromResult(pass < 3);
+                passes.Add(pass.Number);
+                Assert.Equal(2, pass.Traces.Count);
+                Assert.Equal(4, pass.Checks.Count);
+                return ValueTask.FromResult(pass.Number < 3);
             }, CancellationToken.None).WaitAsync(VirtualRuns.Limit);
 
         Assert.Equal([1, 2, 3], passes);

@@ -12,7 +12,7 @@ namespace BenchRunner.Execution.Tests.Running;
 
 public sealed class PlanRunnerTests
 {
-    private static (PlanRunner Runner, VirtualBench Bench) Create(SqliteResultStore? store)
+    private static (RunLauncher Runner, VirtualBench Bench) Create(SqliteResultStore? store)
     {
         var bench = VirtualBench.CreateDemo(seed: 3);
         return (VirtualRuns.Runner(bench, store), bench);

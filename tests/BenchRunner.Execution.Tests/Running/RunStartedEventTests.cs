@@ -10,7 +10,7 @@ namespace BenchRunner.Execution.Tests.Running;
 public sealed class RunStartedEventTests
 {
     [Fact]
-    public async Task Run_FirstEvent_IsRunStartedWithTheStoredRunsId()
+    public async Task Run_FirstEvent_IsRunStartedWithWhatTheRecorderStores()
     {
         using var dir = new TempDirectory();
         using var store = SqliteResultStore.Open(dir.PathOf("runs.db"));
@@ -22,8 +22,12 @@ public sealed class RunStartedEventTests
             .WaitAsync(VirtualRuns.Limit);
 
         var started = Assert.IsType<RunStarted>(observer.Events[0]);
-        Assert.Equal(outcome.RunId, started.RunId);
         Assert.Equal("psf-137-check", started.PlanName);
         Assert.Single(observer.Events.OfType<RunStarted>());
+        Assert.IsType<RunEnded>(observer.Events[^1]);
+        var stored = store.GetRun(outcome.RunId!.Value)!;
+        Assert.Equal(started.Run.PlanText, stored.Record.PlanText);
+        Assert.Equal(started.Run.LimitsJson, stored.Record.ExtraJson);
+        Assert.Equal(RunStatus.Passed, stored.Status);
     }
 }

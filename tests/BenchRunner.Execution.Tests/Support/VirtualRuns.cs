@@ -16,10 +16,10 @@ internal static class VirtualRuns
     public static readonly TimeSpan Limit = TimeSpan.FromSeconds(60);
 
     /// <summary>A runner for <paramref name="definition"/> (default: the example virtual bench file) whose <c>sim:</c> connections reach <paramref name="bench"/>.</summary>
-    public static PlanRunner Runner(VirtualBench bench, SqliteResultStore? store, BenchDefinition? definition = null)
+    public static RunLauncher Runner(VirtualBench bench, IResultWriter? store, BenchDefinition? definition = null)
     {
         var transports = SimulatorConnections.Register(new TransportFactory(), new VirtualBenchServers(bench));
-        return new PlanRunner(definition ?? BenchFile.Load(RepositoryFiles.Example("bench-virtual.yaml")), transports, store);
+        return new RunLauncher(new PlanRunner(definition ?? BenchFile.Load(RepositoryFiles.Example("bench-virtual.yaml")), transports), store);
     }
 
     /// <summary>The example check plan of the 137 MHz preselector.</summary>

@@ -43,7 +43,7 @@ public sealed class TuningSessionTests
     private static TestPlan Plan() => PlanFile.Load(RepositoryFiles.Example("plans/psf-137-tune.yaml"));
 
     /// <summary>A noise-free virtual bench whose board follows the demo trimmer script on <paramref name="clock"/>.</summary>
-    private static PlanRunner Runner(ManualTimeProvider clock, SqliteResultStore? store)
+    private static RunLauncher Runner(ManualTimeProvider clock, SqliteResultStore? store)
     {
         var bench = new VirtualBench(seed: 5, networkAnalyserOptions: new NetworkAnalyserOptions { NoiseEnabled = false });
         bench.NetworkAnalyser.DeviceUnderTest = TuningDemo.Board(clock, TurnTime);
@@ -58,7 +58,7 @@ public sealed class TuningSessionTests
                 profile: profiles/bench-vna-scpi.yaml
                 connection: sim:vna
             """, "scpi-vna.yaml", RepositoryFiles.PathOf("docs/examples"));
-        return new PlanRunner(definition, transports, store, clock);
+        return new RunLauncher(new PlanRunner(definition, transports, clock), store);
     }
 
     private static RunContext Context() => new("plan text", null, "0.1.0", "test-host") { DutSerial = "PSF-24-0002" };
@@ -242,17 +242,26 @@ public sealed class TuningSessionTests
         Assert.Equal([0.0, 2.0, 4.0], passes.Select(p => p.Elapsed.TotalSeconds));
     }
 
-    private sealed class StepCounter : IRunObserver
+    private sealed class StepCounter : IRunListener, IEnumerable<RunSubscription>
     {
         public List<string> Kinds { get; } = [];
 
-        public void OnEvent(RunEvent runEvent)
+        public ValueTask OnEventAsync(RunEvent runEvent, CancellationToken cancellationToken)
         {
             if (runEvent is StepStarted step)
             {
                 Kinds.Add(step.Kind);
             }
+
+            return ValueTask.CompletedTask;
         }
+
+        public IEnumerator<RunSubscription> GetEnumerator()
+        {
+            yield return RunSubscription.Lossless(this, "step counter");
+        }
+
+        System.Collections.IEnumerator System.Collections.IEnumerable.GetEnumerator() => GetEnumerator();
     }
 
     private sealed class Collecting(List<TuningPass> passes) : ITuningObserver

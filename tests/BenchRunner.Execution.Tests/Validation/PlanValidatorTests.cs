@@ -16,7 +16,7 @@ public sealed class PlanValidatorTests
         var validated = RunPreparation.Load(RepositoryFiles.Example("plans/" + plan), VirtualBench);
 
         Assert.NotNull(validated.Bench);
-        Assert.All(validated.Plan.Roles, r => Assert.Equal(r.Kind, validated.Bench!.Instruments[r.Role].Kind));
+        Assert.All(validated.Plan.Roles, r => Assert.Equal(r.Kind, validated.Bench!.Definition.Instruments[r.Role].Kind));
     }
 
     [Fact]
