@@ -42,7 +42,8 @@ internal sealed class RunState(RunEventPipeline events, TimeProvider time, Cance
 
     public ValueTask RecordAsync(CheckResult result)
     {
-        if (result.Trace is { } trace && OverloadedTraces.Contains(trace))
+        // An overload check judges the analyser itself; any other check on a trace it found overloaded is flagged.
+        if (result.Kind != CheckKind.Overload && result.Trace is { } trace && OverloadedTraces.Contains(trace))
         {
             result = result with { TraceOverloaded = true, Detail = $"{result.Detail}; {CheckResult.OverloadedNote}" };
         }

@@ -104,6 +104,10 @@ public sealed class OverloadStepTests
         Assert.Contains("the analyser made 1 line the plan relies on: 412.5 MHz H3 of carrier 1", check.Detail);
         Assert.Contains(OverloadVerdict.OverloadAdvice, check.Detail);
         Assert.Equal(RunStatus.Failed, outcome.Status);
+        // The overload check judges the analyser itself: it is not flagged as judging an overloaded trace; later checks are.
+        Assert.False(check.TraceOverloaded);
+        Assert.DoesNotContain(CheckResult.OverloadedNote, check.Detail, StringComparison.Ordinal);
+        Assert.True(outcome.Checks[1].TraceOverloaded);
     }
 
     [Fact]
