@@ -72,7 +72,7 @@ public static class PlanWriter
             (PlanFileKeys.IfBandwidth, n.IfBandwidth is { } ifbw ? Hz(ifbw) : null)),
         SweepStep s => Map(
             (PlanFileKeys.Role, Scalar(s.Role)),
-            (PlanFileKeys.Traces, $"{{ {string.Join(", ", s.Traces.Select(t => $"{Scalar(t.Name)}: {QuantityWord(t)}"))} }}")),
+            (PlanFileKeys.Traces, $"{{ {string.Join(", ", s.Traces.Select(t => $"{QuantityWord(t)}: {Scalar(t.Name)}"))} }}")),
         OverloadCheckStep o => Map(
             (PlanFileKeys.Role, Scalar(o.Role)),
             (PlanFileKeys.TraceKey, Scalar(o.Trace.Name)),
