@@ -72,7 +72,7 @@ public static class BatchCommand
             var (factory, fixture) = Fixture(benchDefinition, transports, console, cancellationToken);
             var dbPath = parsed.GetRequiredValue(db);
             using var store = ResultStoreOpener.Open(dbPath);
-            var runner = new PlanRunner(benchDefinition, factory);
+            var runner = prepared.Launcher(factory, store);
             var context = prepared.Context(RunCommand.ThisVersion(), Environment.MachineName) with
             {
                 Lot = lotName,

@@ -53,7 +53,7 @@ public static class DemoCommand
             var bench = VirtualBench.CreateDemo(parsed.GetValue(seed));
             var transports = SimulatorConnections.Register(new TransportFactory(), new VirtualBenchServers(bench), cancellationToken);
             using var store = ResultStoreOpener.Open(dbPath);
-            var runner = new RunLauncher(new PlanRunner(prepared.RequiredBench.Definition, transports), store);
+            var runner = prepared.Launcher(transports, store);
 
             report.WriteLine($"BenchRunner demo: the virtual bench tests two 137 MHz preselector boards against the plan \"{prepared.Plan.Name}\".");
             report.WriteLine(SafetyNote);

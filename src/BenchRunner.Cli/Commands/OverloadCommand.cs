@@ -96,7 +96,7 @@ public static class OverloadCommand
                 console.Error.WriteLine(caution);
             }
 
-            var runner = new RunLauncher(new PlanRunner(definition, transports()), store);
+            var runner = run.Launcher(transports(), store);
             var context = run.Context(RunCommand.ThisVersion(), Environment.MachineName);
             var outcome = await runner.RunAsync(plan, context, [RunSubscription.View(new RunProgressView(console.Error, console.UseColour), "progress")], cancellationToken).ConfigureAwait(false);
             var check = outcome.Checks.FirstOrDefault();

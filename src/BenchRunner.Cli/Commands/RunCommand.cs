@@ -43,7 +43,7 @@ public static class RunCommand
             var benchDefinition = prepared.RequiredBench.Definition;
             var dbPath = parsed.GetRequiredValue(db);
             using var store = ResultStoreOpener.Open(dbPath);
-            var runner = new RunLauncher(new PlanRunner(benchDefinition, transports()), store);
+            var runner = prepared.Launcher(transports(), store);
             var context = prepared.Context(ThisVersion(), Environment.MachineName) with
             {
                 DutSerial = parsed.GetValue(dut),

@@ -132,7 +132,7 @@ public static class TuneCommand
                 report.WriteLine(DemoCommand.SafetyNote);
             }
 
-            var session = new TuningSession(new RunLauncher(new PlanRunner(benchDefinition, factory), store), options);
+            var session = new TuningSession(prepared.Launcher(factory, store), options);
             using var signals = new StopSignal(cancellationToken);
             var outcome = await session.RunAsync(prepared.Plan, context, view, null, signals.Token).ConfigureAwait(false);
             if (asJson)

@@ -16,22 +16,22 @@ public sealed class BatchSession
     private readonly RunLauncher _runner;
     private readonly TestPlan _plan;
     private readonly RunContext _context;
-    private readonly IResultStore _store;
+    private readonly IResultReader _store;
     private readonly IBoardFixture _fixture;
 
     /// <summary>Creates a session.</summary>
-    /// <param name="runner">Runs the plan; its runs are recorded into <paramref name="store"/>.</param>
+    /// <param name="runner">Runs the plan and records each run (into the store that <paramref name="history"/> reads).</param>
     /// <param name="plan">The validated plan every board is tested with.</param>
     /// <param name="context">The record kept with every run; its serial, mode and retest flag are set per board.</param>
-    /// <param name="store">The result file: it holds the lot's history, which decides what is a retest.</param>
+    /// <param name="history">The results: they hold the lot's history, which decides what is a retest.</param>
     /// <param name="fixture">Puts each board in place.</param>
     /// <exception cref="ArgumentException">A context without a lot.</exception>
-    public BatchSession(PlanRunner runner, TestPlan plan, RunContext context, IResultStore store, IBoardFixture fixture)
+    public BatchSession(RunLauncher runner, TestPlan plan, RunContext context, IResultReader history, IBoardFixture fixture)
     {
-        _runner = new RunLauncher(runner ?? throw new ArgumentNullException(nameof(runner)), store);
+        _runner = runner ?? throw new ArgumentNullException(nameof(runner));
         _plan = plan ?? throw new ArgumentNullException(nameof(plan));
         _context = context ?? throw new ArgumentNullException(nameof(context));
-        _store = store ?? throw new ArgumentNullException(nameof(store));
+        _store = history ?? throw new ArgumentNullException(nameof(history));
         _fixture = fixture ?? throw new ArgumentNullException(nameof(fixture));
         if (string.IsNullOrWhiteSpace(context.Lot))
         {

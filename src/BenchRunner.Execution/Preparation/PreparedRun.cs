@@ -1,6 +1,8 @@
 using BenchRunner.Execution.Plans;
 using BenchRunner.Execution.Running;
 using BenchRunner.Execution.Validation;
+using BenchRunner.Instruments.Connections;
+using BenchRunner.Storage;
 
 namespace BenchRunner.Execution.Preparation;
 
@@ -19,6 +21,13 @@ public sealed record PreparedRun(TestPlan Plan, string PlanText, PreparedBench? 
 
     /// <summary>The probing and safety cautions to show before the run (empty when none apply).</summary>
     public IReadOnlyList<string> Cautions => Bench is null ? [] : ProbingCautions.For(Plan, Bench.Definition);
+
+    /// <summary>A launcher for runs of this plan on its bench: the runner with its connections, recording into <paramref name="results"/>.</summary>
+    /// <param name="transports">Creates the connections the bench names.</param>
+    /// <param name="results">Where runs are recorded, or null to record nothing.</param>
+    /// <param name="time">The clock for waits, timeouts and timestamps; the system clock by default.</param>
+    public RunLauncher Launcher(TransportFactory transports, IResultWriter? results, TimeProvider? time = null) =>
+        new(new PlanRunner(RequiredBench.Definition, transports, time), results);
 
     /// <summary>What is recorded with a run of this plan on this bench.</summary>
     public RunContext Context(string softwareVersion, string host) => new(PlanText, Bench?.Text, softwareVersion, host);

@@ -56,7 +56,7 @@ public sealed class BatchSessionTests : IDisposable
 
     private BatchSession Session()
     {
-        var runner = VirtualRuns.Runner(_bench, _store).Runner;
+        var runner = VirtualRuns.Runner(_bench, _store);
         return new BatchSession(runner, VirtualRuns.CheckPlan(), VirtualRuns.Context() with { Lot = "PSF-24-L07", Operator = "tester" }, _store, _boards);
     }
 
@@ -135,7 +135,7 @@ public sealed class BatchSessionTests : IDisposable
         var definition = BenchFile.Load(RepositoryFiles.Example("bench-virtual.yaml"));
         var plan = PlanFile.Load(RepositoryFiles.Example("plans/psf-137-check.yaml"));
 
-        Assert.Throws<ArgumentException>(() => new BatchSession(new PlanRunner(definition, transports), plan,
+        Assert.Throws<ArgumentException>(() => new BatchSession(new RunLauncher(new PlanRunner(definition, transports), _store), plan,
             new RunContext("plan text", null, "0.1.0", "host"), _store, _boards));
     }
 }
