@@ -33,6 +33,29 @@ public sealed class OverloadCommandTests
     }
 
     [Fact]
+    public async Task Overload_StoredPlanText_ReadsBackToThePlanThatRan()
+    {
+        using var dir = new TempDirectory();
+        var db = dir.PathOf("runs.db");
+
+        var run = CliRun.Of("overload", "--bench", Bench, "--centre", "137.5MHz", "--span", "4MHz", "--tone", "137.5MHz",
+            "--tone-level", "-30dBm", "--line", "137.8MHz", "--threshold", "-85dBm", "--db", db);
+
+        Assert.Equal(1, run.ExitCode);
+        await using var store = BenchRunner.Storage.ResultStores.Open(db);
+        var stored = (await store.GetRunAsync(1))!;
+        var plan = BenchRunner.Execution.Plans.PlanFile.Parse(stored.Record.PlanText, "stored.yaml", dir.Path);
+        Assert.Equal(["set-generator", "set-spectrum-analyser", "check-overload", "set-generator"], plan.Steps.Select(s => s.Word));
+        var check = Assert.IsType<BenchRunner.Execution.Plans.OverloadCheckStep>(plan.Steps[2]);
+        Assert.Equal(-85, check.Threshold.Dbm);
+        Assert.Equal(137.8e6, Assert.Single(check.Lines!).Hertz);
+        var analyser = Assert.IsType<BenchRunner.Execution.Plans.SpectrumAnalyserSetup>(plan.Steps[1]);
+        Assert.Equal(135.5e6, analyser.Start.Hertz);
+        Assert.Equal(139.5e6, analyser.Stop.Hertz);
+        Assert.Equal(false, Assert.IsType<BenchRunner.Execution.Plans.GeneratorSetup>(plan.Steps[3]).Output);
+    }
+
+    [Fact]
     public void Overload_Json_ListsEveryLineWithItsClass()
     {
         using var dir = new TempDirectory();
