@@ -2,7 +2,7 @@ using System.Globalization;
 using System.Text;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Execution.Bench;
-using BenchRunner.Instruments.Profiles;
+using BenchRunner.Instruments.Kinds;
 
 namespace BenchRunner.Cli.Overload;
 

@@ -3,7 +3,7 @@ using BenchRunner.Core.Masks;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;
 using BenchRunner.Core.Yaml;
-using BenchRunner.Instruments.Profiles;
+using BenchRunner.Instruments.Kinds;
 using static BenchRunner.Execution.Plans.PlanFileKeys;
 
 namespace BenchRunner.Execution.Plans;
@@ -93,7 +93,7 @@ internal sealed partial class PlanFileReader
                 continue;
             }
 
-            if (StrictMap.WordOf(text, role, InstrumentKindWords.All, _problems) is { } kind)
+            if (InstrumentKindWords.WordOf(text, role, _problems) is { } kind)
             {
                 _roles[role] = new RoleRequirement(role, kind, key.Location);
             }

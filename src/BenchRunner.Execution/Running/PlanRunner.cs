@@ -154,7 +154,7 @@ public sealed partial class PlanRunner
         var id = instrument.Identity;
         if (state.RunId is { } runId)
         {
-            _store!.AddInstrument(runId, new InstrumentRecord(role, KindWord(declared.Kind), id.Maker, id.Model, id.Serial, id.Firmware)
+            _store!.AddInstrument(runId, new InstrumentRecord(role, declared.Kind.Word, id.Maker, id.Model, id.Serial, id.Firmware)
             {
                 Connection = declared.Connection.ToString(),
                 CompensationJson = _bench.CompensationOf(role)?.ToJson(),
@@ -364,11 +364,4 @@ public sealed partial class PlanRunner
     private static T Capability<T>(RunState state, string role) where T : class =>
         state.Instruments[role].GetCapability<T>()
         ?? throw new InstrumentException($"the instrument's profile gives it no {typeof(T).Name[1..]} capability", isTransient: false) { Instrument = role };
-
-    private static string KindWord(InstrumentKind kind) => kind switch
-    {
-        InstrumentKind.NetworkAnalyser => "network-analyser",
-        InstrumentKind.SpectrumAnalyser => "spectrum-analyser",
-        _ => "signal-generator",
-    };
 }
