@@ -73,37 +73,56 @@ public abstract class InstrumentKind
     /// <summary>The kind's word.</summary>
     public override string ToString() => Word;
 
+    // The hooks are protected, so that a kind in another assembly overrides them as such; the
+    // adapters and readers call them through these, which also check what a kind's hook built.
+    internal object ResilientCapability(ResilientInstrument owner) => Checked(CreateResilient(owner), "resilient wrapper");
+
+    internal object? RawSection(ProfileSectionReader reader) => ReadProfileSection(reader);
+
+    internal object ProfileCapability(ProfileChannel channel, object section) => Checked(CreateProfileCapability(channel, section), "raw-profile capability");
+
+    internal IScpiCommandSection ScpiDefaults() => DefaultScpiSection() ?? throw Broken("default SCPI section");
+
+    internal IScpiCommandSection ScpiSection(ScpiSectionReader reader) => ReadScpiSection(reader) ?? throw Broken("SCPI section");
+
+    internal object ScpiCapability(ScpiInstrument instrument, IScpiCommandSection section) => Checked(CreateScpiCapability(instrument, section), "SCPI capability");
+
     /// <summary>
     /// Builds the capability object that stands in front of <paramref name="owner"/>'s current adapter:
     /// every call goes through <see cref="ResilientInstrument.ExecuteAsync{T}"/>, and the settings it
     /// needs again after a reconnect are registered with <see cref="ResilientInstrument.Remember"/>.
     /// Must implement <see cref="Capability"/>.
     /// </summary>
-    protected internal abstract object CreateResilient(ResilientInstrument owner);
+    protected abstract object CreateResilient(ResilientInstrument owner);
 
     /// <summary>
     /// Reads the kind's section of an <c>adapter: raw</c> driver profile (the key <see cref="Word"/>),
     /// called only when the profile has that section. Returns the section's commands, or null when
     /// a problem was found (reported through <paramref name="reader"/>).
     /// </summary>
-    protected internal abstract object? ReadProfileSection(ProfileSectionReader reader);
+    protected abstract object? ReadProfileSection(ProfileSectionReader reader);
 
     /// <summary>
     /// Builds the capability of a raw-profile instrument from the section that
     /// <see cref="ReadProfileSection"/> returned. Must implement <see cref="Capability"/>.
     /// </summary>
-    protected internal abstract object CreateProfileCapability(ProfileChannel channel, object section);
+    protected abstract object CreateProfileCapability(ProfileChannel channel, object section);
 
     /// <summary>The kind's SCPI commands when a command set says nothing of them (a disabled section of defaults).</summary>
-    protected internal abstract IScpiCommandSection DefaultScpiSection();
+    protected abstract IScpiCommandSection DefaultScpiSection();
 
     /// <summary>
     /// Reads the kind's section of an <c>adapter: scpi</c> driver profile: every command written there
     /// replaces its default; the section is enabled when the profile lists the kind. Called for
     /// every registered kind, so that a section without its kind can be reported.
     /// </summary>
-    protected internal abstract IScpiCommandSection ReadScpiSection(ScpiSectionReader reader);
+    protected abstract IScpiCommandSection ReadScpiSection(ScpiSectionReader reader);
 
     /// <summary>Builds the capability of a SCPI instrument from its enabled section. Must implement <see cref="Capability"/>.</summary>
-    protected internal abstract object CreateScpiCapability(ScpiInstrument instrument, IScpiCommandSection section);
+    protected abstract object CreateScpiCapability(ScpiInstrument instrument, IScpiCommandSection section);
+
+    private object Checked(object built, string what) =>
+        Capability.IsInstanceOfType(built) ? built : throw Broken($"{what} ({built?.GetType().Name ?? "null"}, not a {Capability.Name})");
+
+    private InvalidOperationException Broken(string what) => new($"The instrument kind \"{Word}\" built no valid {what}.");
 }

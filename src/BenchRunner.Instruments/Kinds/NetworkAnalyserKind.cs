@@ -10,17 +10,17 @@ internal sealed class NetworkAnalyserKind() : InstrumentKind("network-analyser",
 {
     public static NetworkAnalyserKind Instance { get; } = new();
 
-    protected internal override object CreateResilient(ResilientInstrument owner) => new ResilientNetworkAnalyser(owner);
+    protected override object CreateResilient(ResilientInstrument owner) => new ResilientNetworkAnalyser(owner);
 
-    protected internal override object? ReadProfileSection(ProfileSectionReader reader) => CapabilitySectionReader.ReadNetworkAnalyser(reader);
+    protected override object? ReadProfileSection(ProfileSectionReader reader) => CapabilitySectionReader.ReadNetworkAnalyser(reader);
 
-    protected internal override object CreateProfileCapability(ProfileChannel channel, object section) =>
+    protected override object CreateProfileCapability(ProfileChannel channel, object section) =>
         new ProfileNetworkAnalyser(channel.Session, (NetworkAnalyserCommands)section);
 
-    protected internal override IScpiCommandSection DefaultScpiSection() => new ScpiNetworkCommands();
+    protected override IScpiCommandSection DefaultScpiSection() => new ScpiNetworkCommands();
 
-    protected internal override IScpiCommandSection ReadScpiSection(ScpiSectionReader reader) => reader.Reader.ReadNetwork(reader);
+    protected override IScpiCommandSection ReadScpiSection(ScpiSectionReader reader) => reader.Reader.ReadNetwork(reader);
 
-    protected internal override object CreateScpiCapability(ScpiInstrument instrument, IScpiCommandSection section) =>
+    protected override object CreateScpiCapability(ScpiInstrument instrument, IScpiCommandSection section) =>
         new ScpiNetworkAnalyser(instrument, (ScpiNetworkCommands)section);
 }

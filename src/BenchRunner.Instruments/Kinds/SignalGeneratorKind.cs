@@ -10,17 +10,17 @@ internal sealed class SignalGeneratorKind() : InstrumentKind("signal-generator",
 {
     public static SignalGeneratorKind Instance { get; } = new();
 
-    protected internal override object CreateResilient(ResilientInstrument owner) => new ResilientSignalGenerator(owner);
+    protected override object CreateResilient(ResilientInstrument owner) => new ResilientSignalGenerator(owner);
 
-    protected internal override object? ReadProfileSection(ProfileSectionReader reader) => CapabilitySectionReader.ReadSignalGenerator(reader);
+    protected override object? ReadProfileSection(ProfileSectionReader reader) => CapabilitySectionReader.ReadSignalGenerator(reader);
 
-    protected internal override object CreateProfileCapability(ProfileChannel channel, object section) =>
+    protected override object CreateProfileCapability(ProfileChannel channel, object section) =>
         new ProfileSignalGenerator(channel.Session, (SignalGeneratorCommands)section);
 
-    protected internal override IScpiCommandSection DefaultScpiSection() => new ScpiGeneratorCommands();
+    protected override IScpiCommandSection DefaultScpiSection() => new ScpiGeneratorCommands();
 
-    protected internal override IScpiCommandSection ReadScpiSection(ScpiSectionReader reader) => reader.Reader.ReadGenerator(reader);
+    protected override IScpiCommandSection ReadScpiSection(ScpiSectionReader reader) => reader.Reader.ReadGenerator(reader);
 
-    protected internal override object CreateScpiCapability(ScpiInstrument instrument, IScpiCommandSection section) =>
+    protected override object CreateScpiCapability(ScpiInstrument instrument, IScpiCommandSection section) =>
         new ScpiSignalGenerator(instrument, (ScpiGeneratorCommands)section);
 }

@@ -10,17 +10,17 @@ internal sealed class SpectrumAnalyserKind() : InstrumentKind("spectrum-analyser
 {
     public static SpectrumAnalyserKind Instance { get; } = new();
 
-    protected internal override object CreateResilient(ResilientInstrument owner) => new ResilientSpectrumAnalyser(owner);
+    protected override object CreateResilient(ResilientInstrument owner) => new ResilientSpectrumAnalyser(owner);
 
-    protected internal override object? ReadProfileSection(ProfileSectionReader reader) => CapabilitySectionReader.ReadSpectrumAnalyser(reader);
+    protected override object? ReadProfileSection(ProfileSectionReader reader) => CapabilitySectionReader.ReadSpectrumAnalyser(reader);
 
-    protected internal override object CreateProfileCapability(ProfileChannel channel, object section) =>
+    protected override object CreateProfileCapability(ProfileChannel channel, object section) =>
         new ProfileSpectrumAnalyser(channel.Session, (SpectrumAnalyserCommands)section);
 
-    protected internal override IScpiCommandSection DefaultScpiSection() => new ScpiSpectrumCommands();
+    protected override IScpiCommandSection DefaultScpiSection() => new ScpiSpectrumCommands();
 
-    protected internal override IScpiCommandSection ReadScpiSection(ScpiSectionReader reader) => reader.Reader.ReadSpectrum(reader);
+    protected override IScpiCommandSection ReadScpiSection(ScpiSectionReader reader) => reader.Reader.ReadSpectrum(reader);
 
-    protected internal override object CreateScpiCapability(ScpiInstrument instrument, IScpiCommandSection section) =>
+    protected override object CreateScpiCapability(ScpiInstrument instrument, IScpiCommandSection section) =>
         new ScpiSpectrumAnalyser(instrument, (ScpiSpectrumCommands)section);
 }

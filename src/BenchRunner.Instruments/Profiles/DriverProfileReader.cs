@@ -77,7 +77,7 @@ internal sealed class DriverProfileReader
         var sections = new Dictionary<InstrumentKind, object>();
         foreach (var kind in _kinds.Kinds.Where(k => map.Has(k.Word)))
         {
-            if (kind.ReadProfileSection(new ProfileSectionReader(kind, map, _context)) is { } section)
+            if (kind.RawSection(new ProfileSectionReader(kind, map, _context)) is { } section)
             {
                 sections[kind] = section;
             }

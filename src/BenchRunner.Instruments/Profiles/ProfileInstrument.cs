@@ -40,7 +40,7 @@ public sealed class ProfileInstrument : IInstrument
 
         _session = new ProfileSession(name, profile, transport, timeProvider ?? TimeProvider.System);
         var channel = new ProfileChannel(_session);
-        _capabilities = [.. profile.Sections.Select(s => s.Key.CreateProfileCapability(channel, s.Value))];
+        _capabilities = [.. profile.Sections.Select(s => s.Key.ProfileCapability(channel, s.Value))];
     }
 
     /// <inheritdoc/>

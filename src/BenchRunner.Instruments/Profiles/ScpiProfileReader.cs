@@ -32,7 +32,7 @@ internal sealed class ScpiProfileReader(YamlProblems problems)
         var sections = new OrderedDictionary<InstrumentKind, IScpiCommandSection>();
         foreach (var kind in registry.Kinds)
         {
-            sections[kind] = kind.ReadScpiSection(new ScpiSectionReader(this, kind, profile, kinds.Contains(kind)));
+            sections[kind] = kind.ScpiSection(new ScpiSectionReader(this, kind, profile, kinds.Contains(kind)));
         }
 
         var s = Section(profile, ScpiProfileKeys.Scpi, ScpiKeys, ForeignKeys.Nothing);

@@ -230,10 +230,7 @@ public sealed class ResilientInstrument : IInstrument
     {
         var kind = _kinds.ForCapability(capability)
             ?? throw new NotSupportedException($"{Name}: no resilient wrapper for the capability {capability.Name}: no registered kind provides it.");
-        var wrapper = kind.CreateResilient(this);
-        return capability.IsInstanceOfType(wrapper)
-            ? wrapper
-            : throw new InvalidOperationException($"{Name}: the kind \"{kind.Word}\" built a resilient wrapper that is not a {capability.Name}.");
+        return kind.ResilientCapability(this);
     }
 
     private static bool IsTransient(Exception? ex) =>

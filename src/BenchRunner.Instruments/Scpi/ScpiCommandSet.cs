@@ -23,7 +23,7 @@ public sealed class ScpiCommandSet
     {
         foreach (var kind in InstrumentKindRegistry.BuiltIn.Kinds)
         {
-            _sections[kind] = kind.DefaultScpiSection();
+            _sections[kind] = kind.ScpiDefaults();
         }
     }
 

@@ -43,7 +43,7 @@ public sealed class ScpiInstrument : IInstrument
         Limits = limits ?? InstrumentLimits.None;
         Session = new ScpiSession(name, transport, Options.Session, Options.Framing, timeProvider);
         Name = name;
-        _capabilities = [.. commands.Sections.Where(s => s.Value.Enabled).Select(s => s.Key.CreateScpiCapability(this, s.Value))];
+        _capabilities = [.. commands.Sections.Where(s => s.Value.Enabled).Select(s => s.Key.ScpiCapability(this, s.Value))];
     }
 
     /// <inheritdoc/>
