@@ -1,3 +1,5 @@
+using System.Reflection;
+using BenchRunner.Instruments.Capabilities;
 using BenchRunner.Instruments.Profiles;
 using BenchRunner.Instruments.Resilience;
 using BenchRunner.Instruments.Scpi;
@@ -17,10 +19,13 @@ namespace BenchRunner.Instruments.Kinds;
 /// </summary>
 public abstract class InstrumentKind
 {
+    private static readonly MethodInfo GetCapabilityMethod = typeof(IInstrument).GetMethod(nameof(IInstrument.GetCapability))!;
+    private readonly MethodInfo _getCapability;
+
     /// <summary>Describes a kind.</summary>
     /// <param name="word">The kind's word in files, e.g. <c>network-analyser</c>: lower-case letters, digits and hyphens.</param>
     /// <param name="name">The kind in messages, e.g. <c>network analyser</c>.</param>
-    /// <param name="capability">The interface an instrument of this kind offers through <see cref="Capabilities.IInstrument.GetCapability{T}"/>.</param>
+    /// <param name="capability">The interface an instrument of this kind offers through <see cref="IInstrument.GetCapability{T}"/>.</param>
     /// <param name="hasProtectedInput">True when it has an RF input that a declared maximum input level protects.</param>
     /// <param name="hasOutput">True when it puts out RF whose level a declared maximum output level bounds.</param>
     /// <exception cref="ArgumentException">A word that is not lower-case letters, digits and hyphens, an empty name, or a capability that is not an interface.</exception>
@@ -44,15 +49,16 @@ public abstract class InstrumentKind
         Capability = capability;
         HasProtectedInput = hasProtectedInput;
         HasOutput = hasOutput;
+        _getCapability = GetCapabilityMethod.MakeGenericMethod(capability);
     }
 
-    /// <summary>A vector network analyser (<c>network-analyser</c>): <see cref="Capabilities.INetworkAnalyser"/>.</summary>
+    /// <summary>A vector network analyser (<c>network-analyser</c>): <see cref="INetworkAnalyser"/>.</summary>
     public static InstrumentKind NetworkAnalyser => NetworkAnalyserKind.Instance;
 
-    /// <summary>A spectrum analyser (<c>spectrum-analyser</c>): <see cref="Capabilities.ISpectrumAnalyser"/>.</summary>
+    /// <summary>A spectrum analyser (<c>spectrum-analyser</c>): <see cref="ISpectrumAnalyser"/>.</summary>
     public static InstrumentKind SpectrumAnalyser => SpectrumAnalyserKind.Instance;
 
-    /// <summary>A signal generator (<c>signal-generator</c>): <see cref="Capabilities.ISignalGenerator"/>.</summary>
+    /// <summary>A signal generator (<c>signal-generator</c>): <see cref="ISignalGenerator"/>.</summary>
     public static InstrumentKind SignalGenerator => SignalGeneratorKind.Instance;
 
     /// <summary>The kind's word in bench, plan and profile files, and its section key in a driver profile (e.g. <c>network-analyser</c>).</summary>
@@ -72,6 +78,13 @@ public abstract class InstrumentKind
 
     /// <summary>The kind's word.</summary>
     public override string ToString() => Word;
+
+    /// <summary>True when <paramref name="instrument"/> offers this kind's capability.</summary>
+    public bool IsOfferedBy(IInstrument instrument)
+    {
+        ArgumentNullException.ThrowIfNull(instrument);
+        return _getCapability.Invoke(instrument, null) is not null;
+    }
 
     // The hooks are protected, so that a kind in another assembly overrides them as such; the
     // adapters and readers call them through these, which also check what a kind's hook built.

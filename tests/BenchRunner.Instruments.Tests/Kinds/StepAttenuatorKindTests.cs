@@ -141,6 +141,29 @@ public sealed class StepAttenuatorKindTests
     }
 
     [Fact]
+    public async Task ScpiCommandSet_ToySectionGivenInCode_IsCheckedAndBuilt()
+    {
+        var bad = new ScpiCommandSet { Sections = new Dictionary<InstrumentKind, IScpiCommandSection>
+        {
+            [StepAttenuatorKind.Instance] = new ScpiStepAttenuatorCommands { Enabled = true, Set = "ATTenuation {hz}" },
+        } };
+        var good = new ScpiCommandSet { Sections = new Dictionary<InstrumentKind, IScpiCommandSection>
+        {
+            [StepAttenuatorKind.Instance] = new ScpiStepAttenuatorCommands { Enabled = true },
+        } };
+        var (host, _) = InMemoryTransport.CreatePair("att");
+
+        await using var instrument = new ScpiInstrument("att", host, good);
+
+        Assert.Contains(bad.Problems(), p => p.StartsWith("attenuator.set:", StringComparison.Ordinal) && p.Contains("{db}"));
+        Assert.Empty(good.Problems());
+        Assert.Equal(4, good.Sections.Count);
+        Assert.True(StepAttenuatorKind.Instance.IsOfferedBy(instrument));
+        Assert.False(InstrumentKind.NetworkAnalyser.IsOfferedBy(instrument));
+        Assert.False(good.FetchesTraces);
+    }
+
+    [Fact]
     public async Task ResilientInstrument_ToyKindLosingItsConnection_ReconnectsSetsTheAttenuationAgainAndReads()
     {
         var profile = DriverProfile.Parse(RawProfile, "att.yaml", Kinds);
