@@ -55,7 +55,7 @@ internal sealed partial class BenchFileReader
 
         var paths = map.Get(Paths) is { } p ? ReadPaths(p, map, instruments) : [];
         var compensations = map.Get(Compensation) is { } c ? ReadCompensations(c, map, instruments) : [];
-        return _problems.Any ? null : new BenchDefinition(name!, description, instruments, paths, source) { Compensations = compensations };
+        return _problems.Any ? null : new BenchDefinition(name!, description, instruments, paths, source) { Compensations = compensations, Kinds = _kinds };
     }
 
     private void ReadInstruments(YamlItem item, StrictMap top, Dictionary<string, BenchInstrument> into)

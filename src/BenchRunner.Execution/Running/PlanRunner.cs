@@ -148,7 +148,7 @@ public sealed partial class PlanRunner
         var declared = _bench.Instruments[role];
         var instrument = new ResilientInstrument(role,
             () => InstrumentAdapterFactory.Create(role, declared.Profile, declared.Connection, _transports, time: _time),
-            _resilience, _time);
+            _resilience, _time, _bench.Kinds);
         state.Instruments[role] = instrument;
         await instrument.ConnectAsync(cancellationToken).ConfigureAwait(false);
         var id = instrument.Identity;

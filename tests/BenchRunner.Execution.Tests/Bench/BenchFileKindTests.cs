@@ -33,6 +33,7 @@ public sealed class BenchFileKindTests
         Assert.Same(StepAttenuatorKind.Instance, att.Kind);
         Assert.Equal(AdapterKind.Scpi, att.Adapter);
         Assert.Equal(27, att.MaxInputLevel!.Value.Dbm);
+        Assert.Same(Kinds, bench.Kinds);
     }
 
     [Fact]

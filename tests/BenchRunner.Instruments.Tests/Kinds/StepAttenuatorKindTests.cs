@@ -85,12 +85,16 @@ public sealed class StepAttenuatorKindTests
         Assert.StartsWith("\"set\" in \"step-attenuator\": ", problem.Detail);
     }
 
-    [Fact]
-    public async Task RawAdapter_ToyKind_SetsAndReadsBackOverAScriptedPeer()
+    [Theory]
+    [InlineData(true)]
+    [InlineData(false)]
+    public async Task RawAdapter_ToyKind_SetsAndReadsBackOverAScriptedPeer(bool prompted)
     {
+        // Without a prompt, a setting draws no reply and a query's reply is its next line.
+        var text = prompted ? RawProfile : RawProfile.Replace("framing: {prompt: 'att> '}", "framing: {}", StringComparison.Ordinal);
         var (host, device) = InMemoryTransport.CreatePair("att");
-        await using var peer = new ScriptedPeer(device, "\n", new AttenuatorDialect().Handle, prompt: "att> ");
-        await using var instrument = InstrumentAdapterFactory.Create("att", DriverProfile.Parse(RawProfile, "att.yaml", Kinds), host);
+        await using var peer = new ScriptedPeer(device, "\n", new AttenuatorDialect().Handle, prompt: prompted ? "att> " : null);
+        await using var instrument = InstrumentAdapterFactory.Create("att", DriverProfile.Parse(text, "att.yaml", Kinds), host);
         await instrument.ConnectAsync(None).Bounded();
         var attenuator = instrument.GetCapability<IStepAttenuator>();
         Assert.NotNull(attenuator);
