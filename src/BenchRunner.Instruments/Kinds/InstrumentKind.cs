@@ -121,7 +121,10 @@ public abstract class InstrumentKind
     /// </summary>
     protected abstract object CreateProfileCapability(ProfileChannel channel, object section);
 
-    /// <summary>The kind's SCPI commands when a command set says nothing of them (a disabled section of defaults).</summary>
+    /// <summary>
+    /// The kind's SCPI commands when a command set says nothing of them: a disabled section of
+    /// defaults (<see cref="ScpiCommandSet(InstrumentKindRegistry)"/>).
+    /// </summary>
     protected abstract IScpiCommandSection DefaultScpiSection();
 
     /// <summary>

@@ -36,7 +36,7 @@ internal sealed class ScpiProfileReader(YamlProblems problems)
         }
 
         var s = Section(profile, ScpiProfileKeys.Scpi, ScpiKeys, ForeignKeys.Nothing);
-        var commands = new ScpiCommandSet
+        var commands = new ScpiCommandSet(registry)
         {
             Sections = sections,
             Trigger = Command(s, Trigger, "trigger", d.Trigger),

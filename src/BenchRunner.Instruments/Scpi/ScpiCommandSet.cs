@@ -20,8 +20,15 @@ public sealed class ScpiCommandSet
 
     /// <summary>A set with every built-in kind's section at its defaults, disabled.</summary>
     public ScpiCommandSet()
+        : this(InstrumentKindRegistry.BuiltIn)
     {
-        foreach (var kind in InstrumentKindRegistry.BuiltIn.Kinds)
+    }
+
+    /// <summary>A set with a section at its defaults, disabled, for every built-in kind and every kind of <paramref name="kinds"/>.</summary>
+    public ScpiCommandSet(InstrumentKindRegistry kinds)
+    {
+        ArgumentNullException.ThrowIfNull(kinds);
+        foreach (var kind in InstrumentKindRegistry.BuiltIn.Kinds.Concat(kinds.Kinds).Distinct())
         {
             _sections[kind] = kind.ScpiDefaults();
         }

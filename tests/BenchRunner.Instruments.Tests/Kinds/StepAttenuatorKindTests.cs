@@ -162,6 +162,9 @@ public sealed class StepAttenuatorKindTests
         Assert.Contains(bad.Problems(), p => p.StartsWith("attenuator.set:", StringComparison.Ordinal) && p.Contains("{db}"));
         Assert.Empty(good.Problems());
         Assert.Equal(4, good.Sections.Count);
+        var defaults = Assert.IsType<ScpiStepAttenuatorCommands>(new ScpiCommandSet(Kinds).Sections[StepAttenuatorKind.Instance]);
+        Assert.Equal(("ATTenuation {db}", false), (defaults.Set, defaults.Enabled));
+        Assert.Equal(3, new ScpiCommandSet().Sections.Count);
         Assert.True(StepAttenuatorKind.Instance.IsOfferedBy(instrument));
         Assert.False(InstrumentKind.NetworkAnalyser.IsOfferedBy(instrument));
         Assert.False(good.FetchesTraces);
