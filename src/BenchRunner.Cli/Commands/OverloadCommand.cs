@@ -12,7 +12,7 @@ using BenchRunner.Execution.Plans;
 using BenchRunner.Execution.Running;
 using BenchRunner.Execution.Validation;
 using BenchRunner.Instruments.Connections;
-using BenchRunner.Instruments.Profiles;
+using BenchRunner.Instruments.Kinds;
 using BenchRunner.Storage;
 using BenchRunner.Core.Runs;
 using BenchRunner.Execution.Preparation;

@@ -73,13 +73,13 @@ public static class ValidateCommand
         var steps = p.AllSteps().ToList();
         int overload = steps.Count(s => s is OverloadCheckStep);
         int checks = steps.Count(s => s is MaskCheck) + steps.OfType<FigureCheck>().Sum(f => f.Limits.Count) + overload;
-        var roles = string.Join(", ", p.Roles.Select(r => $"{r.Role} ({Execution.InstrumentKindWords.Of(r.Kind)})"));
+        var roles = string.Join(", ", p.Roles.Select(r => $"{r.Role} ({r.Kind.Word})"));
         if (asJson)
         {
             var roleArray = new JsonArray();
             foreach (var r in p.Roles)
             {
-                roleArray.Add(new JsonObject { ["role"] = r.Role, ["kind"] = Execution.InstrumentKindWords.Of(r.Kind) });
+                roleArray.Add(new JsonObject { ["role"] = r.Role, ["kind"] = r.Kind.Word });
             }
 
             console.Out.WriteLine(new JsonObject

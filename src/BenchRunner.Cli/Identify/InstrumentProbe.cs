@@ -3,6 +3,7 @@ using BenchRunner.Core.Diagnostics;
 using BenchRunner.Instruments.Adapters;
 using BenchRunner.Instruments.Capabilities;
 using BenchRunner.Instruments.Connections;
+using BenchRunner.Instruments.Kinds;
 using BenchRunner.Instruments.Profiles;
 
 namespace BenchRunner.Cli.Identify;
@@ -31,10 +32,7 @@ public static class InstrumentProbe
 
         await using var instrument = InstrumentAdapterFactory.Create("instrument", profile, parsed.Value, transports, recordPath);
         await instrument.ConnectAsync(cancellationToken).ConfigureAwait(false);
-        var capabilities = new List<string>();
-        if (instrument.GetCapability<INetworkAnalyser>() is not null) capabilities.Add("network analyser");
-        if (instrument.GetCapability<ISpectrumAnalyser>() is not null) capabilities.Add("spectrum analyser");
-        if (instrument.GetCapability<ISignalGenerator>() is not null) capabilities.Add("signal generator");
+        var capabilities = InstrumentKindRegistry.BuiltIn.Kinds.Where(k => k.IsOfferedBy(instrument)).Select(k => k.Name).ToList();
         return new IdentifyOutcome(connectionText, profile?.Name, instrument.Identity, capabilities, instrument.Limits, recordPath);
     }
 

@@ -4,7 +4,7 @@ using BenchRunner.Core.Traces;
 using BenchRunner.Execution.Plans;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Execution.Bench;
-using BenchRunner.Instruments.Profiles;
+using BenchRunner.Instruments.Kinds;
 
 namespace BenchRunner.Cli.Overload;
 
@@ -61,7 +61,7 @@ public sealed class OverloadRequest
     public static string PickRole(BenchDefinition bench, InstrumentKind kind, string? named, string option)
     {
         ArgumentNullException.ThrowIfNull(bench);
-        var word = Execution.InstrumentKindWords.Of(kind);
+        var word = kind.Word;
         var candidates = bench.Instruments.Values.Where(i => i.Kind == kind).Select(i => i.Role).ToList();
         if (named is not null)
         {

@@ -1,3 +1,5 @@
+using BenchRunner.Instruments.Kinds;
+
 namespace BenchRunner.Execution.Bench;
 
 /// <summary>A bench as its bench file describes it: its instruments by role and the paths between them.</summary>
@@ -15,6 +17,12 @@ public sealed record BenchDefinition(
 {
     /// <summary>The path compensation of each spectrum analyser input that has one, by the analyser's role (the bench file's <c>compensation</c> section).</summary>
     public IReadOnlyDictionary<string, InputCompensation> Compensations { get; init; } = new Dictionary<string, InputCompensation>();
+
+    /// <summary>
+    /// The kinds of instrument the bench was read with (<see cref="InstrumentKindRegistry.BuiltIn"/>
+    /// unless <see cref="BenchFile.Load"/> was given others); its instruments are built and wrapped with them.
+    /// </summary>
+    public InstrumentKindRegistry Kinds { get; init; } = InstrumentKindRegistry.BuiltIn;
 
     /// <summary>The compensation declared for <paramref name="role"/>'s input, or null.</summary>
     public InputCompensation? CompensationOf(string role) => Compensations.TryGetValue(role, out var c) ? c : null;

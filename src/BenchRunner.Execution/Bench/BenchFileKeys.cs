@@ -30,7 +30,4 @@ internal static class BenchFileKeys
     public static readonly IReadOnlyList<string> CompensationKeys = [Probe, Impedance, Attenuators, DcBlock, Cable];
     public static readonly IReadOnlyList<string> InstrumentKeys = [Kind, Adapter, Profile, Connection, Limits, Description];
     public static readonly IReadOnlyList<string> LimitKeys = [MaxInputLevel, MaxOutputLevel];
-
-    public static readonly IReadOnlyList<(string Word, BenchAdapter Value)> Adapters =
-        [("scpi", BenchAdapter.Scpi), ("profile", BenchAdapter.Profile)];
 }

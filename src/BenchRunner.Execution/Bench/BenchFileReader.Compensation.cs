@@ -1,7 +1,7 @@
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Validity;
 using BenchRunner.Core.Yaml;
-using BenchRunner.Instruments.Profiles;
+using BenchRunner.Instruments.Kinds;
 using static BenchRunner.Execution.Bench.BenchFileKeys;
 
 namespace BenchRunner.Execution.Bench;
@@ -34,7 +34,7 @@ internal sealed partial class BenchFileReader
 
             if (instrument.Kind != InstrumentKind.SpectrumAnalyser)
             {
-                _problems.Add(key, $"compensation is applied to spectrum traces; \"{role}\" is a {InstrumentKindWords.Of(instrument.Kind)}");
+                _problems.Add(key, $"compensation is applied to spectrum traces; \"{role}\" is a {instrument.Kind.Word}");
                 continue;
             }
 

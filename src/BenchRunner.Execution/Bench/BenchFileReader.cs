@@ -1,7 +1,9 @@
 using BenchRunner.Core.Diagnostics;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Yaml;
+using BenchRunner.Instruments.Adapters;
 using BenchRunner.Instruments.Connections;
+using BenchRunner.Instruments.Kinds;
 using BenchRunner.Instruments.Profiles;
 using static BenchRunner.Execution.Bench.BenchFileKeys;
 
@@ -15,19 +17,21 @@ internal sealed partial class BenchFileReader
 {
     private readonly YamlProblems _problems;
     private readonly string _folder;
+    private readonly InstrumentKindRegistry _kinds;
 
-    private BenchFileReader(string source, string folder)
+    private BenchFileReader(string source, string folder, InstrumentKindRegistry kinds)
     {
         _problems = new YamlProblems(source);
         _folder = folder;
+        _kinds = kinds;
     }
 
-    public static BenchDefinition Read(string text, string source, string folder)
+    public static BenchDefinition Read(string text, string source, string folder, InstrumentKindRegistry kinds)
     {
         var root = YamlTreeReader.Read(text, source)
             ?? throw new InputFormatException(new SourceLocation(source, 1, 1),
                 "the file holds no bench; expected keys such as \"bench:\" and \"instruments:\"");
-        var reader = new BenchFileReader(source, folder);
+        var reader = new BenchFileReader(source, folder, kinds);
         var bench = reader.ReadBench(root, source);
         reader._problems.ThrowIfAny();
         return bench ?? throw new InvalidOperationException("A bench with no problems was not built.");
@@ -51,7 +55,7 @@ internal sealed partial class BenchFileReader
 
         var paths = map.Get(Paths) is { } p ? ReadPaths(p, map, instruments) : [];
         var compensations = map.Get(Compensation) is { } c ? ReadCompensations(c, map, instruments) : [];
-        return _problems.Any ? null : new BenchDefinition(name!, description, instruments, paths, source) { Compensations = compensations };
+        return _problems.Any ? null : new BenchDefinition(name!, description, instruments, paths, source) { Compensations = compensations, Kinds = _kinds };
     }
 
     private void ReadInstruments(YamlItem item, StrictMap top, Dictionary<string, BenchInstrument> into)
@@ -87,8 +91,9 @@ internal sealed partial class BenchFileReader
             return null;
         }
 
-        var kind = map.Word(Kind, InstrumentKindWords.All, "say what it is: network-analyser, spectrum-analyser or signal-generator");
-        var adapter = map.Word(Adapter, Adapters, "say how it is spoken to: scpi, or profile (with \"profile:\" naming the profile file)");
+        var kind = _kinds.Word(map, Kind, $"say what it is: {_kinds.Choices}");
+        var adapter = map.Word(Adapter, AdapterKindWords.InBenches,
+            $"say how it is spoken to: {AdapterKindWords.Scpi}, or {AdapterKindWords.RawInBench} (with \"{Profile}:\" naming the profile file)");
         var connection = ReadConnection(map);
         var profile = ReadProfile(map, role, kind, adapter);
         var (maxInput, maxOutput) = ReadLimits(map, role, kind);
@@ -125,14 +130,14 @@ internal sealed partial class BenchFileReader
         return parsed.Value;
     }
 
-    private DriverProfile? ReadProfile(StrictMap map, string role, InstrumentKind? kind, BenchAdapter? adapter)
+    private DriverProfile? ReadProfile(StrictMap map, string role, InstrumentKind? kind, AdapterKind? adapter)
     {
         var text = map.Text(Profile);
         if (text is null)
         {
-            if (adapter == BenchAdapter.Profile && !map.Has(Profile))
+            if (adapter == AdapterKind.Raw && !map.Has(Profile))
             {
-                _problems.Add(map.Key(Adapter)!, $"instrument \"{role}\" uses \"{Adapter}: profile\" but names no profile file; add \"{Profile}: FILE\"");
+                _problems.Add(map.Key(Adapter)!, $"instrument \"{role}\" uses \"{Adapter}: {AdapterKindWords.RawInBench}\" but names no profile file; add \"{Profile}: FILE\"");
             }
 
             return null;
@@ -148,7 +153,7 @@ internal sealed partial class BenchFileReader
         DriverProfile profile;
         try
         {
-            profile = DriverProfile.Load(path);
+            profile = DriverProfile.Load(path, _kinds);
         }
         catch (InputFormatException ex)
         {
@@ -163,15 +168,15 @@ internal sealed partial class BenchFileReader
 
         if (kind is { } k && !profile.Kinds.Contains(k))
         {
-            _problems.Add(text, $"the profile \"{profile.Name}\" describes {string.Join(", ", profile.Kinds.Select(InstrumentKindWords.Of))}, not {InstrumentKindWords.Of(k)} as instrument \"{role}\" is declared");
+            _problems.Add(text, $"the profile \"{profile.Name}\" describes {string.Join(", ", profile.Kinds.Select(p => p.Word))}, not {k.Word} as instrument \"{role}\" is declared");
         }
 
-        var expected = adapter == BenchAdapter.Scpi ? AdapterKind.Scpi : AdapterKind.Raw;
-        if (adapter is not null && profile.AdapterKind != expected)
+        if (adapter is { } a && profile.AdapterKind != a)
         {
-            _problems.Add(text, adapter == BenchAdapter.Scpi
-                ? $"the profile \"{profile.Name}\" is a raw profile, but instrument \"{role}\" uses \"{Adapter}: scpi\"; use \"{Adapter}: profile\" or a scpi profile"
-                : $"the profile \"{profile.Name}\" is a scpi profile, but instrument \"{role}\" uses \"{Adapter}: profile\"; use \"{Adapter}: scpi\" or a raw profile");
+            var other = a == AdapterKind.Scpi ? AdapterKind.Raw : AdapterKind.Scpi;
+            _problems.Add(text,
+                $"the profile \"{profile.Name}\" is a {AdapterKindWords.InProfile(profile.AdapterKind)} profile, but instrument \"{role}\" uses \"{Adapter}: {AdapterKindWords.InBench(a)}\"; " +
+                $"use \"{Adapter}: {AdapterKindWords.InBench(other)}\" or a {AdapterKindWords.InProfile(a)} profile");
         }
 
         return profile;
@@ -187,14 +192,16 @@ internal sealed partial class BenchFileReader
 
         var maxInput = limits.Parsed(MaxInputLevel, Level.Parse);
         var maxOutput = limits.Parsed(MaxOutputLevel, Level.Parse);
-        if (kind == InstrumentKind.SignalGenerator && limits.Key(MaxInputLevel) is { } inputKey)
+        if (kind is { HasProtectedInput: false } && limits.Key(MaxInputLevel) is { } inputKey)
         {
-            _problems.Add(inputKey, $"instrument \"{role}\" is a signal-generator and has no RF input to protect; declare \"{MaxOutputLevel}\" instead");
+            _problems.Add(inputKey, $"instrument \"{role}\" is a {kind.Word} and has no RF input to protect" +
+                (kind.HasOutput ? $"; declare \"{MaxOutputLevel}\" instead" : ""));
         }
 
-        if (kind is { } k && InstrumentKindWords.IsAnalyser(k) && limits.Key(MaxOutputLevel) is { } outputKey && k == InstrumentKind.SpectrumAnalyser)
+        if (kind is { HasOutput: false } && limits.Key(MaxOutputLevel) is { } outputKey)
         {
-            _problems.Add(outputKey, $"instrument \"{role}\" is a spectrum-analyser and has no output; declare \"{MaxInputLevel}\" instead");
+            _problems.Add(outputKey, $"instrument \"{role}\" is a {kind.Word} and has no output" +
+                (kind.HasProtectedInput ? $"; declare \"{MaxInputLevel}\" instead" : ""));
         }
 
         return (maxInput, maxOutput);

@@ -2,7 +2,7 @@ using BenchRunner.Core.Diagnostics;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;
 using BenchRunner.Core.Yaml;
-using BenchRunner.Instruments.Profiles;
+using BenchRunner.Instruments.Kinds;
 using static BenchRunner.Execution.Plans.PlanFileKeys;
 
 namespace BenchRunner.Execution.Plans;

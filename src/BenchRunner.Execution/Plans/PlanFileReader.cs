@@ -3,7 +3,7 @@ using BenchRunner.Core.Masks;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;
 using BenchRunner.Core.Yaml;
-using BenchRunner.Instruments.Profiles;
+using BenchRunner.Instruments.Kinds;
 using static BenchRunner.Execution.Plans.PlanFileKeys;
 
 namespace BenchRunner.Execution.Plans;
@@ -93,7 +93,7 @@ internal sealed partial class PlanFileReader
                 continue;
             }
 
-            if (StrictMap.WordOf(text, role, InstrumentKindWords.All, _problems) is { } kind)
+            if (InstrumentKindWords.WordOf(text, role, _problems) is { } kind)
             {
                 _roles[role] = new RoleRequirement(role, kind, key.Location);
             }
@@ -179,17 +179,17 @@ internal sealed partial class PlanFileReader
         }
 
         var role = text.Value.Trim();
-        var able = string.Join(" or ", kinds.Select(InstrumentKindWords.Of));
+        var able = string.Join(" or ", kinds.Select(k => k.Word));
         if (!_roles.TryGetValue(role, out var declared))
         {
             var known = _roles.Count == 0 ? "none" : string.Join(", ", _roles.Keys);
-            _problems.Add(text, $"unknown role \"{role}\"; the plan's \"{Roles}\" declares {known} (add \"{role}: {InstrumentKindWords.Of(kinds[0])}\" there)");
+            _problems.Add(text, $"unknown role \"{role}\"; the plan's \"{Roles}\" declares {known} (add \"{role}: {kinds[0].Word}\" there)");
             return null;
         }
 
         if (!kinds.Contains(declared.Kind))
         {
-            _problems.Add(text, $"\"{step}\" needs a {able}, but role \"{role}\" is a {InstrumentKindWords.Of(declared.Kind)}");
+            _problems.Add(text, $"\"{step}\" needs a {able}, but role \"{role}\" is a {declared.Kind.Word}");
             return null;
         }
 

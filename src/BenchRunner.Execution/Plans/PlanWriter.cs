@@ -36,7 +36,7 @@ public static class PlanWriter
         Line(text, $"{PlanFileKeys.Roles}:");
         foreach (var role in plan.Roles)
         {
-            Line(text, $"  {Scalar(role.Role)}: {InstrumentKindWords.Of(role.Kind)}");
+            Line(text, $"  {Scalar(role.Role)}: {role.Kind.Word}");
         }
 
         Line(text, $"{PlanFileKeys.Steps}:");

@@ -1,5 +1,5 @@
 using BenchRunner.Core.Diagnostics;
-using BenchRunner.Instruments.Profiles;
+using BenchRunner.Instruments.Kinds;
 
 namespace BenchRunner.Execution.Plans;
 

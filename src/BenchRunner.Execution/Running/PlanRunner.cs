@@ -167,11 +167,11 @@ public sealed partial class PlanRunner
         var declared = _bench.Instruments[role];
         var instrument = new ResilientInstrument(role,
             () => InstrumentAdapterFactory.Create(role, declared.Profile, declared.Connection, _transports, time: _time),
-            _resilience, _time);
+            _resilience, _time, _bench.Kinds);
         state.Instruments[role] = instrument;
         await instrument.ConnectAsync(cancellationToken).ConfigureAwait(false);
         var id = instrument.Identity;
-        await state.EmitAsync(now => new InstrumentConnected(now, role, InstrumentKindWords.Of(declared.Kind), id.Maker, id.Model, id.Serial, id.Firmware)
+        await state.EmitAsync(now => new InstrumentConnected(now, role, declared.Kind.Word, id.Maker, id.Model, id.Serial, id.Firmware)
         {
             Connection = declared.Connection.ToString(),
             CompensationJson = _bench.CompensationOf(role)?.ToJson(),

@@ -27,11 +27,11 @@ public static class PlanValidator
             if (!bench.Instruments.TryGetValue(role.Role, out var instrument))
             {
                 var has = bench.Instruments.Count == 0 ? "none" : string.Join(", ", bench.Instruments.Keys);
-                problems.Add(new(role.Location, $"the plan needs a {InstrumentKindWords.Of(role.Kind)} \"{role.Role}\", but the bench \"{bench.Name}\" ({bench.Source}) has no instrument of that name; it has {has}"));
+                problems.Add(new(role.Location, $"the plan needs a {role.Kind.Word} \"{role.Role}\", but the bench \"{bench.Name}\" ({bench.Source}) has no instrument of that name; it has {has}"));
             }
             else if (instrument.Kind != role.Kind)
             {
-                problems.Add(new(role.Location, $"the plan needs \"{role.Role}\" to be a {InstrumentKindWords.Of(role.Kind)}, but on the bench \"{bench.Name}\" it is a {InstrumentKindWords.Of(instrument.Kind)} ({instrument.Location})"));
+                problems.Add(new(role.Location, $"the plan needs \"{role.Role}\" to be a {role.Kind.Word}, but on the bench \"{bench.Name}\" it is a {instrument.Kind.Word} ({instrument.Location})"));
             }
         }
 

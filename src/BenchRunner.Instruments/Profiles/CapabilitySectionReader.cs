@@ -4,18 +4,22 @@ using static BenchRunner.Instruments.Profiles.DriverProfileKeys;
 
 namespace BenchRunner.Instruments.Profiles;
 
-/// <summary>Reads the sections of a profile that hold each capability's commands.</summary>
+/// <summary>Reads the raw-profile sections of the built-in kinds, each opened by its kind's <see cref="ProfileSectionReader"/>.</summary>
 internal sealed class CapabilitySectionReader(ProfileReadContext context)
 {
     private readonly YamlProblems _problems = context.Problems;
 
-    public NetworkAnalyserCommands? ReadNetworkAnalyser(StrictMap profile)
+    public static NetworkAnalyserCommands? ReadNetworkAnalyser(ProfileSectionReader reader) =>
+        reader.Open(NetworkKeys, ForeignKeys.ScpiInRawNetwork) is { } s ? new CapabilitySectionReader(reader.Context).ReadNetworkAnalyser(s) : null;
+
+    public static SpectrumAnalyserCommands? ReadSpectrumAnalyser(ProfileSectionReader reader) =>
+        reader.Open(SpectrumKeys, ForeignKeys.ScpiInRawSpectrum) is { } s ? new CapabilitySectionReader(reader.Context).ReadSpectrumAnalyser(s) : null;
+
+    public static SignalGeneratorCommands? ReadSignalGenerator(ProfileSectionReader reader) =>
+        reader.Open(GeneratorKeys) is { } s ? new CapabilitySectionReader(reader.Context).ReadSignalGenerator(s) : null;
+
+    private NetworkAnalyserCommands? ReadNetworkAnalyser(StrictMap s)
     {
-        var s = ForeignKeys.Mapping(profile, NetworkAnalyser, NetworkKeys, AdapterKind.Raw, ForeignKeys.ScpiInRawNetwork);
-        if (s is null)
-        {
-            return null;
-        }
 
         var setup = context.Commands(s, Setup, TemplateVariables.NetworkSweep,
             "the setup sets the sweep, e.g. \"setup: band {start:hz} {stop:hz} {points}\"");
@@ -35,13 +39,8 @@ internal sealed class CapabilitySectionReader(ProfileReadContext context)
             : null;
     }
 
-    public SpectrumAnalyserCommands? ReadSpectrumAnalyser(StrictMap profile)
+    private SpectrumAnalyserCommands? ReadSpectrumAnalyser(StrictMap s)
     {
-        var s = ForeignKeys.Mapping(profile, SpectrumAnalyser, SpectrumKeys, AdapterKind.Raw, ForeignKeys.ScpiInRawSpectrum);
-        if (s is null)
-        {
-            return null;
-        }
 
         var setup = context.Commands(s, Setup, TemplateVariables.Spectrum,
             "the setup sets span, RBW, attenuation and reference level, e.g. \"setup: ['span {start:hz} {stop:hz}', 'rbw {rbw:hz}']\"");
@@ -60,13 +59,8 @@ internal sealed class CapabilitySectionReader(ProfileReadContext context)
             : null;
     }
 
-    public SignalGeneratorCommands? ReadSignalGenerator(StrictMap profile)
+    private SignalGeneratorCommands? ReadSignalGenerator(StrictMap s)
     {
-        var s = profile.Mapping(SignalGenerator, GeneratorKeys);
-        if (s is null)
-        {
-            return null;
-        }
 
         var frequency = RequiredCommand(s, FrequencyKey, TemplateVariables.GeneratorFrequency, "frequency", "freq {frequency:hz}");
         var level = RequiredCommand(s, LevelKey, TemplateVariables.GeneratorLevel, "level", "level {level:dbm}");

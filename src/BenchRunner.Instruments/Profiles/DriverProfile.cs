@@ -1,6 +1,8 @@
 using BenchRunner.Core.Diagnostics;
+using BenchRunner.Instruments.Adapters;
 using BenchRunner.Instruments.Capabilities;
 using BenchRunner.Instruments.Framing;
+using BenchRunner.Instruments.Kinds;
 using BenchRunner.Instruments.Scpi;
 
 namespace BenchRunner.Instruments.Profiles;
@@ -21,18 +23,12 @@ public sealed class DriverProfile
         Name = name;
         Description = description;
         AdapterKind = adapter;
-        Adapter = adapter == AdapterKind.Scpi ? ScpiAdapter : RawAdapter;
+        Adapter = AdapterKindWords.InProfile(adapter);
         Kinds = kinds;
         Framing = framing;
         Timing = timing;
         Limits = limits;
     }
-
-    /// <summary>The word of a raw line-dialect profile: <c>adapter: raw</c>.</summary>
-    public const string RawAdapter = "raw";
-
-    /// <summary>The word of a SCPI profile: <c>adapter: scpi</c>.</summary>
-    public const string ScpiAdapter = "scpi";
 
     /// <summary>The profile's name (<c>profile:</c>).</summary>
     public string Name { get; }
@@ -40,7 +36,7 @@ public sealed class DriverProfile
     /// <summary>Free text, or null.</summary>
     public string? Description { get; }
 
-    /// <summary>The adapter that speaks the profile, as written: <see cref="RawAdapter"/> or <see cref="ScpiAdapter"/>.</summary>
+    /// <summary>The adapter that speaks the profile, as written: <c>raw</c> or <c>scpi</c> (<see cref="AdapterKindWords.InProfiles"/>).</summary>
     public string Adapter { get; }
 
     /// <summary>The adapter that speaks the profile.</summary>
@@ -77,14 +73,20 @@ public sealed class DriverProfile
     /// <summary>Raw: commands sent after the identity at each connection, to bring the device to a known state (none for a scpi profile).</summary>
     public IReadOnlyList<CommandTemplate> OnConnect { get; private init; } = [];
 
+    /// <summary>
+    /// Raw: each kind's section as its <see cref="InstrumentKind"/> read it (e.g. <see cref="NetworkAnalyserCommands"/>),
+    /// in the order of <see cref="Kinds"/>; empty for a scpi profile.
+    /// </summary>
+    public IReadOnlyDictionary<InstrumentKind, object> Sections { get; private init; } = new Dictionary<InstrumentKind, object>();
+
     /// <summary>Raw: the network analyser commands, or null when not a network analyser (and for a scpi profile).</summary>
-    public NetworkAnalyserCommands? NetworkAnalyser { get; private init; }
+    public NetworkAnalyserCommands? NetworkAnalyser => SectionOf<NetworkAnalyserCommands>(InstrumentKind.NetworkAnalyser);
 
     /// <summary>Raw: the spectrum analyser commands, or null when not a spectrum analyser (and for a scpi profile).</summary>
-    public SpectrumAnalyserCommands? SpectrumAnalyser { get; private init; }
+    public SpectrumAnalyserCommands? SpectrumAnalyser => SectionOf<SpectrumAnalyserCommands>(InstrumentKind.SpectrumAnalyser);
 
     /// <summary>Raw: the signal generator commands, or null when not a signal generator (and for a scpi profile).</summary>
-    public SignalGeneratorCommands? SignalGenerator { get; private init; }
+    public SignalGeneratorCommands? SignalGenerator => SectionOf<SignalGeneratorCommands>(InstrumentKind.SignalGenerator);
 
     /// <summary>
     /// Scpi: the command set, with a section enabled for each kind listed and every command the
@@ -96,10 +98,14 @@ public sealed class DriverProfile
     /// <summary>Scpi: timeouts, error-queue draining, framing and reset on connect; null for a raw profile.</summary>
     public ScpiInstrumentOptions? ScpiOptions { get; private init; }
 
+    /// <summary>Raw: the section of <paramref name="kind"/> as <typeparamref name="T"/>, or null when the profile has none of that type.</summary>
+    public T? SectionOf<T>(InstrumentKind kind) where T : class =>
+        Sections.TryGetValue(kind, out var section) ? section as T : null;
+
     internal static DriverProfile ForRaw(string name, string? description, IReadOnlyList<InstrumentKind> kinds,
         FramingOptions framing, string? acknowledgement, ProfileTiming timing, IdentityRule identity, InstrumentLimits limits,
         ErrorReplyRule? errorReply, BoolWords boolWords, IReadOnlyList<CommandTemplate> onConnect,
-        NetworkAnalyserCommands? networkAnalyser, SpectrumAnalyserCommands? spectrumAnalyser, SignalGeneratorCommands? signalGenerator) =>
+        IReadOnlyDictionary<InstrumentKind, object> sections) =>
         new(name, description, AdapterKind.Raw, kinds, framing, timing, limits)
         {
             Acknowledgement = acknowledgement,
@@ -107,9 +113,7 @@ public sealed class DriverProfile
             ErrorReply = errorReply,
             BoolWords = boolWords,
             OnConnect = onConnect,
-            NetworkAnalyser = networkAnalyser,
-            SpectrumAnalyser = spectrumAnalyser,
-            SignalGenerator = signalGenerator,
+            Sections = sections,
         };
 
     internal static DriverProfile ForScpi(string name, string? description, IReadOnlyList<InstrumentKind> kinds,
@@ -121,22 +125,25 @@ public sealed class DriverProfile
         };
 
     /// <summary>Reads the profile file at <paramref name="path"/>; messages name the path as given.</summary>
+    /// <param name="path">The profile file.</param>
+    /// <param name="kinds">The kinds the profile may name; <see cref="InstrumentKindRegistry.BuiltIn"/> when null.</param>
     /// <exception cref="InputFormatException">The file is not a valid profile; it holds every problem found.</exception>
     /// <exception cref="IOException">The file cannot be read.</exception>
-    public static DriverProfile Load(string path)
+    public static DriverProfile Load(string path, InstrumentKindRegistry? kinds = null)
     {
         ArgumentException.ThrowIfNullOrEmpty(path);
-        return Parse(File.ReadAllText(path), path);
+        return Parse(File.ReadAllText(path), path, kinds);
     }
 
     /// <summary>Parses profile text. All problems found are reported together in one exception.</summary>
     /// <param name="text">The file's content.</param>
     /// <param name="sourceName">The name used in messages, usually the file's path.</param>
+    /// <param name="kinds">The kinds the profile may name; <see cref="InstrumentKindRegistry.BuiltIn"/> when null.</param>
     /// <exception cref="InputFormatException">The text is not a valid profile.</exception>
-    public static DriverProfile Parse(string text, string sourceName)
+    public static DriverProfile Parse(string text, string sourceName, InstrumentKindRegistry? kinds = null)
     {
         ArgumentNullException.ThrowIfNull(text);
         ArgumentNullException.ThrowIfNull(sourceName);
-        return DriverProfileReader.Read(text, sourceName);
+        return DriverProfileReader.Read(text, sourceName, kinds ?? InstrumentKindRegistry.BuiltIn);
     }
 }

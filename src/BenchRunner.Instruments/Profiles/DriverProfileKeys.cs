@@ -1,4 +1,5 @@
 using BenchRunner.Core.Traces;
+using BenchRunner.Instruments.Kinds;
 
 namespace BenchRunner.Instruments.Profiles;
 
@@ -16,15 +17,18 @@ internal static class DriverProfileKeys
     public const string ErrorReply = "error-reply";
     public const string BoolWordsKey = "bool-words";
     public const string OnConnect = "on-connect";
-    public const string NetworkAnalyser = "network-analyser";
-    public const string SpectrumAnalyser = "spectrum-analyser";
-    public const string SignalGenerator = "signal-generator";
 
-    public static readonly IReadOnlyList<string> Top =
-    [
-        Profile, Description, Adapter, Kinds, FramingKey, Timing, Identity, Limits, ErrorReply, BoolWordsKey, OnConnect,
-        NetworkAnalyser, SpectrumAnalyser, SignalGenerator,
-    ];
+    // The keys of a raw profile before its kinds' sections, each of which is keyed by its kind's word.
+    private static readonly IReadOnlyList<string> TopBeforeSections =
+        [Profile, Description, Adapter, Kinds, FramingKey, Timing, Identity, Limits, ErrorReply, BoolWordsKey, OnConnect];
+
+    /// <summary>The top-level keys of a raw profile: its own, then a section for each registered kind.</summary>
+    public static IReadOnlyList<string> Top(InstrumentKindRegistry kinds) => [.. TopBeforeSections, .. kinds.Kinds.Select(k => k.Word)];
+
+    /// <summary>True for a top-level key of either adapter's profiles: no kind may take one of these words.</summary>
+    /// <remarks>A method, not a field: the two key classes' fields refer to each other, and a field here would be read half-built.</remarks>
+    public static bool IsReserved(string word) =>
+        TopBeforeSections.Contains(word, StringComparer.OrdinalIgnoreCase) || ScpiProfileKeys.TopBeforeSections.Contains(word, StringComparer.OrdinalIgnoreCase);
 
     public const string CommandEnd = "command-end";
     public const string ReplyEndKey = "reply-end";
@@ -83,12 +87,6 @@ internal static class DriverProfileKeys
     public const string Scale = "scale";
     public const string Offset = "offset";
     public static readonly IReadOnlyList<string> ColumnKeys = [Value, Scale, Offset];
-
-    public static readonly IReadOnlyList<(string Word, InstrumentKind Value)> KindWords =
-    [
-        (NetworkAnalyser, InstrumentKind.NetworkAnalyser), (SpectrumAnalyser, InstrumentKind.SpectrumAnalyser),
-        (SignalGenerator, InstrumentKind.SignalGenerator),
-    ];
 
     public static readonly IReadOnlyList<(string Word, ReplyLayout Value)> Layouts =
         [("point-per-line", ReplyLayout.PointPerLine), ("one-line", ReplyLayout.OneLine)];

@@ -1,8 +1,10 @@
 using BenchRunner.Core.Diagnostics;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Yaml;
+using BenchRunner.Instruments.Adapters;
 using BenchRunner.Instruments.Capabilities;
 using BenchRunner.Instruments.Framing;
+using BenchRunner.Instruments.Kinds;
 using BenchRunner.Instruments.Scpi;
 using static BenchRunner.Instruments.Profiles.DriverProfileKeys;
 
@@ -16,19 +18,21 @@ internal sealed class DriverProfileReader
 {
     private readonly ProfileReadContext _context;
     private readonly YamlProblems _problems;
+    private readonly InstrumentKindRegistry _kinds;
 
-    private DriverProfileReader(string source)
+    private DriverProfileReader(string source, InstrumentKindRegistry kinds)
     {
         _problems = new YamlProblems(source);
         _context = new ProfileReadContext(_problems);
+        _kinds = kinds;
     }
 
-    public static DriverProfile Read(string text, string source)
+    public static DriverProfile Read(string text, string source, InstrumentKindRegistry kinds)
     {
         var root = YamlTreeReader.Read(text, source)
             ?? throw new InputFormatException(new SourceLocation(source, 1, 1),
                 "the file holds no profile; expected keys such as \"profile:\", \"kinds:\" and \"identity:\"");
-        var reader = new DriverProfileReader(source);
+        var reader = new DriverProfileReader(source, kinds);
         var profile = reader.ReadProfile(root);
         reader._problems.ThrowIfAny();
         return profile ?? throw new InvalidOperationException("A profile with no problems was not built.");
@@ -38,7 +42,7 @@ internal sealed class DriverProfileReader
     {
         var adapter = ReadAdapter(root);
         bool scpi = adapter == AdapterKind.Scpi;
-        var map = ForeignKeys.Open(root, "the profile", scpi ? ScpiProfileKeys.Top : Top, adapter,
+        var map = ForeignKeys.Open(root, "the profile", scpi ? ScpiProfileKeys.Top(_kinds) : Top(_kinds), adapter,
             scpi ? ForeignKeys.RawInScpiTop : ForeignKeys.ScpiInRawTop, _problems);
         if (map is null)
         {
@@ -55,7 +59,7 @@ internal sealed class DriverProfileReader
         var kindList = kinds.Select(k => k.Kind).ToList();
         if (scpi)
         {
-            var read = new ScpiProfileReader(_problems).Read(map, kindList, framing, timing);
+            var read = new ScpiProfileReader(_problems).Read(map, _kinds, kindList, framing, timing);
             return _problems.Any || read is not { } set
                 ? null
                 : DriverProfile.ForScpi(name!, description, kindList, timing, limits, set.Commands, set.Options);
@@ -69,18 +73,24 @@ internal sealed class DriverProfileReader
             : null;
         var onConnect = _context.Commands(map, OnConnect, TemplateVariables.None) ?? [];
 
-        var sections = new CapabilitySectionReader(_context);
-        var network = map.Has(NetworkAnalyser) ? sections.ReadNetworkAnalyser(map) : null;
-        var spectrum = map.Has(SpectrumAnalyser) ? sections.ReadSpectrumAnalyser(map) : null;
-        var generator = map.Has(SignalGenerator) ? sections.ReadSignalGenerator(map) : null;
+        // Every section written is read, listed or not, so that its own problems are reported too.
+        var sections = new Dictionary<InstrumentKind, object>();
+        foreach (var kind in _kinds.Kinds.Where(k => map.Has(k.Word)))
+        {
+            if (kind.RawSection(new ProfileSectionReader(kind, map, _context)) is { } section)
+            {
+                sections[kind] = section;
+            }
+        }
 
         if (_problems.Any)
         {
             return null;
         }
 
+        var listedSections = kindList.Where(sections.ContainsKey).ToDictionary(k => k, k => sections[k]);
         return DriverProfile.ForRaw(name!, description, kindList, framing, acknowledgement, timing,
-            identity!, limits, errorReply, _context.Words, onConnect, network, spectrum, generator);
+            identity!, limits, errorReply, _context.Words, onConnect, listedSections);
     }
 
     private string? OneLine(StrictMap map, string key, string? missingHint = null)
@@ -108,7 +118,7 @@ internal sealed class DriverProfileReader
             return AdapterKind.Raw;
         }
 
-        const string expected = "expected raw (a line dialect described by the profile) or scpi (an IEEE 488.2 / SCPI instrument)";
+        const string expected = $"expected {AdapterKindWords.RawInProfile} (a line dialect described by the profile) or {AdapterKindWords.Scpi} (an IEEE 488.2 / SCPI instrument)";
         if (entry.Value is not YamlText { IsNull: false } text || string.IsNullOrWhiteSpace(text.Value))
         {
             _problems.Add(entry.Value is YamlText ? entry.Key.Location : entry.Value.Location,
@@ -117,14 +127,12 @@ internal sealed class DriverProfileReader
         }
 
         var word = text.Value.Trim();
-        if (string.Equals(word, DriverProfile.RawAdapter, StringComparison.OrdinalIgnoreCase))
+        foreach (var (adapterWord, adapter) in AdapterKindWords.InProfiles)
         {
-            return AdapterKind.Raw;
-        }
-
-        if (string.Equals(word, DriverProfile.ScpiAdapter, StringComparison.OrdinalIgnoreCase))
-        {
-            return AdapterKind.Scpi;
+            if (string.Equals(word, adapterWord, StringComparison.OrdinalIgnoreCase))
+            {
+                return adapter;
+            }
         }
 
         _problems.Add(text, $"unknown value \"{text.Value}\" for \"{Adapter}\"; {expected}");
@@ -134,33 +142,33 @@ internal sealed class DriverProfileReader
     private List<(InstrumentKind Kind, YamlItem Item)> ReadKinds(StrictMap map)
     {
         var kinds = new List<(InstrumentKind, YamlItem)>();
-        var value = map.Require(Kinds, "say what the instrument is, e.g. \"kinds: [network-analyser]\"");
+        var value = map.Require(DriverProfileKeys.Kinds, "say what the instrument is, e.g. \"kinds: [network-analyser]\"");
         if (value is null)
         {
             return kinds;
         }
 
-        var choices = string.Join(", ", KindWords.Select(k => k.Word));
+        var choices = string.Join(", ", _kinds.Kinds.Select(k => k.Word));
         var items = value is YamlList list ? list.Items : [value];
         if (items.Count == 0)
         {
-            _problems.Add(value, $"\"{Kinds}\" is empty; expected one or more of {choices}");
+            _problems.Add(value, $"\"{DriverProfileKeys.Kinds}\" is empty; expected one or more of {choices}");
         }
 
         foreach (var item in items)
         {
             if (item is not YamlText { IsNull: false } text)
             {
-                _problems.Add(item is YamlText ? map.ValueLocation(Kinds) : item.Location,
-                    $"expected a kind of instrument ({choices}) in \"{Kinds}\", found {StrictMap.Describe(item)}");
+                _problems.Add(item is YamlText ? map.ValueLocation(DriverProfileKeys.Kinds) : item.Location,
+                    $"expected a kind of instrument ({choices}) in \"{DriverProfileKeys.Kinds}\", found {StrictMap.Describe(item)}");
                 continue;
             }
 
-            if (StrictMap.WordOf(text, Kinds, KindWords, _problems) is { } kind)
+            if (_kinds.WordOf(text, DriverProfileKeys.Kinds, _problems) is { } kind)
             {
                 if (kinds.Any(k => k.Item1 == kind))
                 {
-                    _problems.Add(text, $"\"{text.Value}\" is listed twice in \"{Kinds}\"");
+                    _problems.Add(text, $"\"{text.Value}\" is listed twice in \"{DriverProfileKeys.Kinds}\"");
                 }
                 else
                 {
@@ -175,16 +183,16 @@ internal sealed class DriverProfileReader
     // A raw profile needs each kind's section; a scpi profile may leave one out to keep every default.
     private void CheckKindsAgainstSections(StrictMap map, List<(InstrumentKind Kind, YamlItem Item)> kinds, bool sectionRequired)
     {
-        foreach (var (word, kind) in KindWords)
+        foreach (var (word, kind) in _kinds.Words)
         {
             var listed = kinds.FirstOrDefault(k => k.Kind == kind);
             if (listed.Item is not null && !map.Has(word) && sectionRequired)
             {
-                _problems.Add(listed.Item, $"\"{Kinds}\" lists {word}, but the profile has no \"{word}:\" section with its commands");
+                _problems.Add(listed.Item, $"\"{DriverProfileKeys.Kinds}\" lists {word}, but the profile has no \"{word}:\" section with its commands");
             }
-            else if (listed.Item is null && map.Key(word) is { } key && map.Has(Kinds))
+            else if (listed.Item is null && map.Key(word) is { } key && map.Has(DriverProfileKeys.Kinds))
             {
-                _problems.Add(key, $"the profile has a \"{word}:\" section, but \"{Kinds}\" does not list {word}");
+                _problems.Add(key, $"the profile has a \"{word}:\" section, but \"{DriverProfileKeys.Kinds}\" does not list {word}");
             }
         }
     }

@@ -1,5 +1,6 @@
 using BenchRunner.Core.Diagnostics;
 using BenchRunner.Core.Yaml;
+using BenchRunner.Instruments.Adapters;
 using static BenchRunner.Instruments.Profiles.DriverProfileKeys;
 using static BenchRunner.Instruments.Profiles.ScpiProfileKeys;
 
@@ -120,7 +121,8 @@ internal static class ForeignKeys
 
     private static string Message(string key, AdapterKind adapter, string hint)
     {
-        var (mine, other) = adapter == AdapterKind.Scpi ? (DriverProfile.ScpiAdapter, DriverProfile.RawAdapter) : (DriverProfile.RawAdapter, DriverProfile.ScpiAdapter);
+        var mine = AdapterKindWords.InProfile(adapter);
+        var other = AdapterKindWords.InProfile(adapter == AdapterKind.Scpi ? AdapterKind.Raw : AdapterKind.Scpi);
         return $"\"{key}\" is a key of adapter: {other} profiles, and this profile is adapter: {mine}; {hint}";
     }
 }

@@ -1,3 +1,4 @@
+using BenchRunner.Instruments.Adapters;
 using BenchRunner.Instruments.Capabilities;
 using BenchRunner.Instruments.Transports;
 
@@ -5,8 +6,9 @@ namespace BenchRunner.Instruments.Profiles;
 
 /// <summary>
 /// An instrument that speaks the raw line dialect of a <see cref="DriverProfile"/> over any
-/// transport. It offers the capabilities the profile declares (<see cref="INetworkAnalyser"/>,
-/// <see cref="ISpectrumAnalyser"/>, <see cref="ISignalGenerator"/>); settle delays and timeouts are
+/// transport. It offers the capability of each kind the profile declares (<see cref="INetworkAnalyser"/>,
+/// <see cref="ISpectrumAnalyser"/>, <see cref="ISignalGenerator"/>, or a registered kind's), each built by
+/// its <see cref="Kinds.InstrumentKind"/> from the kind's section; settle delays and timeouts are
 /// measured on the injected <see cref="TimeProvider"/>. One operation runs at a time; calls made
 /// meanwhile wait their turn. Failures are <see cref="Errors.InstrumentException"/>s naming the
 /// instrument, the command and what came back; a refused command is an
@@ -16,9 +18,7 @@ namespace BenchRunner.Instruments.Profiles;
 public sealed class ProfileInstrument : IInstrument
 {
     private readonly ProfileSession _session;
-    private readonly INetworkAnalyser? _networkAnalyser;
-    private readonly ISpectrumAnalyser? _spectrumAnalyser;
-    private readonly ISignalGenerator? _signalGenerator;
+    private readonly IReadOnlyList<object> _capabilities;
 
     /// <summary>Creates the instrument; nothing is sent before <see cref="ConnectAsync"/>.</summary>
     /// <param name="name">The instrument's bench name, used in every message.</param>
@@ -39,9 +39,8 @@ public sealed class ProfileInstrument : IInstrument
         }
 
         _session = new ProfileSession(name, profile, transport, timeProvider ?? TimeProvider.System);
-        _networkAnalyser = profile.NetworkAnalyser is { } na ? new ProfileNetworkAnalyser(_session, na) : null;
-        _spectrumAnalyser = profile.SpectrumAnalyser is { } sa ? new ProfileSpectrumAnalyser(_session, sa) : null;
-        _signalGenerator = profile.SignalGenerator is { } sg ? new ProfileSignalGenerator(_session, sg) : null;
+        var channel = new ProfileChannel(_session);
+        _capabilities = [.. profile.Sections.Select(s => s.Key.ProfileCapability(channel, s.Value))];
     }
 
     /// <inheritdoc/>
@@ -67,8 +66,7 @@ public sealed class ProfileInstrument : IInstrument
     public Task ConnectAsync(CancellationToken cancellationToken) => _session.ConnectAsync(cancellationToken);
 
     /// <inheritdoc/>
-    public T? GetCapability<T>() where T : class =>
-        _networkAnalyser as T ?? _spectrumAnalyser as T ?? _signalGenerator as T;
+    public T? GetCapability<T>() where T : class => _capabilities.OfType<T>().FirstOrDefault();
 
     /// <summary>Closes the transport.</summary>
     public async ValueTask DisposeAsync() => await _session.CloseAsync().ConfigureAwait(false);

@@ -139,6 +139,18 @@ internal sealed class ProfileSession
         }
     }
 
+    /// <summary>Sends a query and returns its reply: the lines up to the prompt (blank ones dropped), or the next line without one.</summary>
+    public async Task<IReadOnlyList<string>> QueryAsync(string command, TimeSpan timeout, CancellationToken cancellationToken)
+    {
+        var connection = Connection;
+        await Io(command, async () => { await connection.SendAsync(command, cancellationToken).ConfigureAwait(false); return true; }).ConfigureAwait(false);
+        IReadOnlyList<string> lines = HasPrompt
+            ? (await ReadToPromptAsync(command, timeout, cancellationToken).ConfigureAwait(false)).Where(l => l.Trim().Length > 0).ToList()
+            : [await NextLineAsync(command, _time.GetTimestamp(), timeout, cancellationToken).ConfigureAwait(false)];
+        CheckErrors(command, lines);
+        return lines;
+    }
+
     /// <summary>Reads the data of one sweep or trace.</summary>
     public async Task<SweepReply> ReadSweepAsync(string command, ReplyGrammar grammar, int? expectedPoints, TimeSpan timeout, CancellationToken cancellationToken)
     {

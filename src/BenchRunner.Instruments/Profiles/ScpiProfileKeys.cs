@@ -1,4 +1,5 @@
 using BenchRunner.Core.Traces;
+using BenchRunner.Instruments.Kinds;
 using BenchRunner.Instruments.Scpi;
 using static BenchRunner.Instruments.Profiles.DriverProfileKeys;
 
@@ -9,8 +10,11 @@ internal static class ScpiProfileKeys
 {
     public const string Scpi = "scpi";
 
-    public static readonly IReadOnlyList<string> Top =
-        [Profile, Description, Adapter, Kinds, FramingKey, Timing, Limits, Scpi, NetworkAnalyser, SpectrumAnalyser, SignalGenerator];
+    // The keys of a scpi profile before its kinds' sections, each of which is keyed by its kind's word.
+    public static readonly IReadOnlyList<string> TopBeforeSections = [Profile, Description, Adapter, DriverProfileKeys.Kinds, FramingKey, Timing, Limits, Scpi];
+
+    /// <summary>The top-level keys of a scpi profile: its own, then a section for each registered kind.</summary>
+    public static IReadOnlyList<string> Top(InstrumentKindRegistry kinds) => [.. TopBeforeSections, .. kinds.Kinds.Select(k => k.Word)];
 
     public static readonly IReadOnlyList<string> FramingKeys = [CommandEnd, ReplyEndKey, MaxMessageBytes];
     public static readonly IReadOnlyList<string> TimingKeys = [CommandTimeout, SweepTimeout];

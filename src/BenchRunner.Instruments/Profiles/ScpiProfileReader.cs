@@ -1,7 +1,9 @@
 using BenchRunner.Core.Diagnostics;
 using BenchRunner.Core.Traces;
 using BenchRunner.Core.Yaml;
+using BenchRunner.Instruments.Adapters;
 using BenchRunner.Instruments.Framing;
+using BenchRunner.Instruments.Kinds;
 using BenchRunner.Instruments.Scpi;
 using static BenchRunner.Instruments.Profiles.ScpiProfileKeys;
 
@@ -21,16 +23,22 @@ internal sealed class ScpiProfileReader(YamlProblems problems)
 
     /// <summary>The command set and options, or null when a problem was found (all are reported).</summary>
     public (ScpiCommandSet Commands, ScpiInstrumentOptions Options)? Read(
-        StrictMap profile, IReadOnlyCollection<InstrumentKind> kinds, FramingOptions framing, ProfileTiming timing)
+        StrictMap profile, InstrumentKindRegistry registry, IReadOnlyCollection<InstrumentKind> kinds, FramingOptions framing, ProfileTiming timing)
     {
         var d = new ScpiCommandSet();
         var ds = new ScpiSessionOptions();
-        var s = Section(profile, ScpiProfileKeys.Scpi, ScpiKeys, ForeignKeys.Nothing);
-        var commands = new ScpiCommandSet
+        // Every registered kind's section is read, enabled when the kind is listed; a section of an
+        // unlisted kind is reported by the profile reader.
+        var sections = new OrderedDictionary<InstrumentKind, IScpiCommandSection>();
+        foreach (var kind in registry.Kinds)
         {
-            Network = ReadNetwork(profile, kinds.Contains(InstrumentKind.NetworkAnalyser)),
-            Spectrum = ReadSpectrum(profile, kinds.Contains(InstrumentKind.SpectrumAnalyser)),
-            Generator = ReadGenerator(profile, kinds.Contains(InstrumentKind.SignalGenerator)),
+            sections[kind] = kind.ScpiSection(new ScpiSectionReader(this, kind, profile, kinds.Contains(kind)));
+        }
+
+        var s = Section(profile, ScpiProfileKeys.Scpi, ScpiKeys, ForeignKeys.Nothing);
+        var commands = new ScpiCommandSet(registry)
+        {
+            Sections = sections,
             Trigger = Command(s, Trigger, "trigger", d.Trigger),
             DataFormat = s?.Word(DataFormat, DataFormats) ?? d.DataFormat,
             ByteOrder = s?.Word(ByteOrder, ByteOrders) ?? d.ByteOrder,
@@ -65,10 +73,10 @@ internal sealed class ScpiProfileReader(YamlProblems problems)
         return problems.Any ? null : (commands, options);
     }
 
-    private ScpiNetworkCommands ReadNetwork(StrictMap profile, bool enabled)
+    internal ScpiNetworkCommands ReadNetwork(ScpiSectionReader reader)
     {
-        var d = new ScpiNetworkCommands();
-        var s = Section(profile, DriverProfileKeys.NetworkAnalyser, NetworkKeys, ForeignKeys.RawInScpiNetwork);
+        var (enabled, d) = (reader.Enabled, new ScpiNetworkCommands());
+        var s = reader.Open(NetworkKeys, ForeignKeys.RawInScpiNetwork);
         const string at = "network";
         return new ScpiNetworkCommands
         {
@@ -84,10 +92,10 @@ internal sealed class ScpiProfileReader(YamlProblems problems)
         };
     }
 
-    private ScpiSpectrumCommands ReadSpectrum(StrictMap profile, bool enabled)
+    internal ScpiSpectrumCommands ReadSpectrum(ScpiSectionReader reader)
     {
-        var d = new ScpiSpectrumCommands();
-        var s = Section(profile, DriverProfileKeys.SpectrumAnalyser, SpectrumKeys, ForeignKeys.RawInScpiSpectrum);
+        var (enabled, d) = (reader.Enabled, new ScpiSpectrumCommands());
+        var s = reader.Open(SpectrumKeys, ForeignKeys.RawInScpiSpectrum);
         const string at = "spectrum";
         return new ScpiSpectrumCommands
         {
@@ -104,10 +112,10 @@ internal sealed class ScpiProfileReader(YamlProblems problems)
         };
     }
 
-    private ScpiGeneratorCommands ReadGenerator(StrictMap profile, bool enabled)
+    internal ScpiGeneratorCommands ReadGenerator(ScpiSectionReader reader)
     {
-        var d = new ScpiGeneratorCommands();
-        var s = Section(profile, DriverProfileKeys.SignalGenerator, GeneratorKeys, ForeignKeys.Nothing);
+        var (enabled, d) = (reader.Enabled, new ScpiGeneratorCommands());
+        var s = reader.Open(GeneratorKeys);
         const string at = "generator";
         return new ScpiGeneratorCommands
         {
@@ -158,7 +166,7 @@ internal sealed class ScpiProfileReader(YamlProblems problems)
     }
 
     // An optional section: absent or empty (a bare "network-analyser:") keeps every default.
-    private StrictMap? Section(StrictMap profile, string key, IReadOnlyList<string> keys, IReadOnlyDictionary<string, string> foreign) =>
+    internal StrictMap? Section(StrictMap profile, string key, IReadOnlyList<string> keys, IReadOnlyDictionary<string, string> foreign) =>
         profile.Get(key) is null or YamlText { IsNull: true }
             ? null
             : ForeignKeys.Mapping(profile, key, keys, AdapterKind.Scpi, foreign);
@@ -168,7 +176,7 @@ internal sealed class ScpiProfileReader(YamlProblems problems)
     /// reported), null for <c>none</c>, otherwise the text as written; its place is remembered
     /// under <paramref name="name"/>.
     /// </summary>
-    private string? Command(StrictMap? section, string key, string name, string? fallback, string? described = null)
+    internal string? Command(StrictMap? section, string key, string name, string? fallback, string? described = null)
     {
         var value = section?.Get(key);
         if (section is null || value is null)

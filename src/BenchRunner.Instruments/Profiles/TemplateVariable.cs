@@ -1,7 +1,13 @@
 namespace BenchRunner.Instruments.Profiles;
 
-/// <summary>A name a command template may use, with the kind of value it stands for.</summary>
-internal sealed record TemplateVariable(string Name, TemplateValueKind Kind)
+/// <summary>
+/// A name a command template may use, with the kind of value it stands for: <c>{attenuation}</c> in a
+/// template is allowed only when the section's reader is given such a variable, and is rendered from
+/// the <see cref="TemplateArguments"/> value of that name.
+/// </summary>
+/// <param name="Name">The placeholder's name.</param>
+/// <param name="Kind">The kind of value; it decides which placeholder types fit.</param>
+public sealed record TemplateVariable(string Name, TemplateValueKind Kind)
 {
     /// <summary>The type used when a placeholder gives none (<c>{points}</c>).</summary>
     public PlaceholderType DefaultType => Kind switch

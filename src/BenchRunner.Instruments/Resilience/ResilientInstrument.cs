@@ -1,5 +1,6 @@
 using BenchRunner.Instruments.Capabilities;
 using BenchRunner.Instruments.Errors;
+using BenchRunner.Instruments.Kinds;
 using Polly;
 using Polly.CircuitBreaker;
 using Polly.Retry;
@@ -12,7 +13,8 @@ namespace BenchRunner.Instruments.Resilience;
 /// operation, retries with exponential backoff for idempotent operations after a transient
 /// failure, a reconnect before each retry (a fresh adapter from the factory, with the last
 /// settings applied again), and a circuit breaker for this instrument alone. Operations on one
-/// instrument run one at a time. Cancellation by the caller is never retried.
+/// instrument run one at a time. Cancellation by the caller is never retried. Each capability is
+/// wrapped by the <see cref="InstrumentKind"/> that provides it.
 /// </summary>
 public sealed class ResilientInstrument : IInstrument
 {
@@ -20,6 +22,7 @@ public sealed class ResilientInstrument : IInstrument
     private static readonly ResiliencePropertyKey<bool> IdempotentKey = new("benchrunner.idempotent");
 
     private readonly Func<IInstrument> _factory;
+    private readonly InstrumentKindRegistry _kinds;
     private readonly InstrumentResilienceOptions _options;
     private readonly ResiliencePipeline _pipeline;
     private readonly SemaphoreSlim _gate = new(1, 1);
@@ -33,12 +36,18 @@ public sealed class ResilientInstrument : IInstrument
     /// <param name="factory">Creates a fresh, unconnected adapter (called again to reconnect).</param>
     /// <param name="options">Timeouts, retries and breaker settings; validated here.</param>
     /// <param name="timeProvider">The clock for timeouts, backoff and the breaker.</param>
-    public ResilientInstrument(string name, Func<IInstrument> factory, InstrumentResilienceOptions? options = null, TimeProvider? timeProvider = null)
+    /// <param name="kinds">
+    /// The kinds whose capabilities can be wrapped, each by its <see cref="InstrumentKind"/>;
+    /// <see cref="InstrumentKindRegistry.BuiltIn"/> when null.
+    /// </param>
+    public ResilientInstrument(string name, Func<IInstrument> factory, InstrumentResilienceOptions? options = null, TimeProvider? timeProvider = null,
+        InstrumentKindRegistry? kinds = null)
     {
         ArgumentException.ThrowIfNullOrEmpty(name);
         ArgumentNullException.ThrowIfNull(factory);
         Name = name;
         _factory = factory;
+        _kinds = kinds ?? InstrumentKindRegistry.BuiltIn;
         _options = options ?? new InstrumentResilienceOptions();
         _options.Validate();
         _pipeline = BuildPipeline(_options, timeProvider ?? TimeProvider.System);
@@ -152,9 +161,14 @@ public sealed class ResilientInstrument : IInstrument
         }
     }
 
-    /// <summary>Registers an action that brings a fresh adapter back to the last settings.</summary>
-    internal void Remember(Func<IInstrument, CancellationToken, Task> restore)
+    /// <summary>
+    /// Registers an action that brings a fresh adapter back to the last settings; it runs after every
+    /// reconnect, before the operation that needed the reconnect. A kind's resilient capability
+    /// registers one when it is built (<see cref="InstrumentKind"/>).
+    /// </summary>
+    public void Remember(Func<IInstrument, CancellationToken, Task> restore)
     {
+        ArgumentNullException.ThrowIfNull(restore);
         lock (_restorers)
         {
             _restorers.Add(restore);
@@ -212,13 +226,12 @@ public sealed class ResilientInstrument : IInstrument
         }
     }
 
-    private object CreateWrapper(Type capability) => capability switch
+    private object CreateWrapper(Type capability)
     {
-        _ when capability == typeof(INetworkAnalyser) => new ResilientNetworkAnalyser(this),
-        _ when capability == typeof(ISpectrumAnalyser) => new ResilientSpectrumAnalyser(this),
-        _ when capability == typeof(ISignalGenerator) => new ResilientSignalGenerator(this),
-        _ => throw new NotSupportedException($"{Name}: no resilient wrapper for the capability {capability.Name}."),
-    };
+        var kind = _kinds.ForCapability(capability)
+            ?? throw new NotSupportedException($"{Name}: no resilient wrapper for the capability {capability.Name}: no registered kind provides it.");
+        return kind.ResilientCapability(this);
+    }
 
     private static bool IsTransient(Exception? ex) =>
         ex is InstrumentException { IsTransient: true } and not InstrumentUnavailableException || ex is TimeoutRejectedException || ex is IOException;

@@ -1,7 +1,7 @@
 namespace BenchRunner.Instruments.Scpi;
 
-/// <summary>The checks shared by the parts of a <see cref="ScpiCommandSet"/>.</summary>
-internal static class ScpiCommandChecks
+/// <summary>The checks shared by the parts of a <see cref="ScpiCommandSet"/>, a registered kind's section included.</summary>
+public static class ScpiCommandChecks
 {
     /// <summary>
     /// Checks one template: present when <paramref name="required"/>, parsable with exactly the
@@ -9,8 +9,15 @@ internal static class ScpiCommandChecks
     /// <paramref name="query"/>: a setting that draws a reply, or a query that draws none, would
     /// put every later reply out of step.
     /// </summary>
-    public static void Check(List<string> problems, string name, string? template, ScpiPlaceholder? expected, bool required, bool query = false)
+    /// <param name="problems">Where a problem is added, as <c>name: what</c>.</param>
+    /// <param name="name">Where the command sits in the set, e.g. <c>network.start</c>.</param>
+    /// <param name="template">The command, or null when left out.</param>
+    /// <param name="expected">The one placeholder it must hold, or null for none.</param>
+    /// <param name="required">Whether leaving it out is a problem.</param>
+    /// <param name="query">Whether it must be a query (holding <c>?</c>) rather than a setting.</param>
+    public static void Check(ICollection<string> problems, string name, string? template, ScpiPlaceholder? expected, bool required, bool query = false)
     {
+        ArgumentNullException.ThrowIfNull(problems);
         if (template is null)
         {
             if (required)
@@ -37,6 +44,6 @@ internal static class ScpiCommandChecks
     }
 
     /// <summary>Parses a template that <see cref="ScpiCommandSet.Validate"/> has already accepted.</summary>
-    public static ScpiCommandTemplate Template(string template, ScpiPlaceholder? expected) =>
+    internal static ScpiCommandTemplate Template(string template, ScpiPlaceholder? expected) =>
         ScpiCommandTemplate.Parse(template, expected).Value;
 }

@@ -1,3 +1,5 @@
+using BenchRunner.Instruments.Kinds;
+
 namespace BenchRunner.Instruments.Scpi;
 
 /// <summary>
@@ -8,18 +10,67 @@ namespace BenchRunner.Instruments.Scpi;
 /// profile names what its instrument understands. No capability is enabled by default; a set
 /// with none enabled is refused unless <see cref="IdentificationOnly"/> says that is meant.
 /// Placeholders are typed: see <see cref="ScpiPlaceholder"/>.
+/// Each kind of instrument has its section (<see cref="Sections"/>); the built-in kinds' sections are
+/// also reached by name (<see cref="Network"/>, <see cref="Spectrum"/>, <see cref="Generator"/>).
 /// Do not change a command set after handing it to an instrument.
 /// </summary>
 public sealed class ScpiCommandSet
 {
-    /// <summary>Network-analyser commands (disabled by default).</summary>
-    public ScpiNetworkCommands Network { get; init; } = new();
+    private readonly OrderedDictionary<InstrumentKind, IScpiCommandSection> _sections = [];
 
-    /// <summary>Spectrum-analyser commands (disabled by default).</summary>
-    public ScpiSpectrumCommands Spectrum { get; init; } = new();
+    /// <summary>A set with every built-in kind's section at its defaults, disabled.</summary>
+    public ScpiCommandSet()
+        : this(InstrumentKindRegistry.BuiltIn)
+    {
+    }
 
-    /// <summary>Signal-generator commands (disabled by default).</summary>
-    public ScpiGeneratorCommands Generator { get; init; } = new();
+    /// <summary>A set with a section at its defaults, disabled, for every built-in kind and every kind of <paramref name="kinds"/>.</summary>
+    public ScpiCommandSet(InstrumentKindRegistry kinds)
+    {
+        ArgumentNullException.ThrowIfNull(kinds);
+        foreach (var kind in InstrumentKindRegistry.BuiltIn.Kinds.Concat(kinds.Kinds).Distinct())
+        {
+            _sections[kind] = kind.ScpiDefaults();
+        }
+    }
+
+    /// <summary>Network-analyser commands (disabled by default): the section of <see cref="InstrumentKind.NetworkAnalyser"/>.</summary>
+    public ScpiNetworkCommands Network
+    {
+        get => (ScpiNetworkCommands)_sections[InstrumentKind.NetworkAnalyser];
+        init => _sections[InstrumentKind.NetworkAnalyser] = value;
+    }
+
+    /// <summary>Spectrum-analyser commands (disabled by default): the section of <see cref="InstrumentKind.SpectrumAnalyser"/>.</summary>
+    public ScpiSpectrumCommands Spectrum
+    {
+        get => (ScpiSpectrumCommands)_sections[InstrumentKind.SpectrumAnalyser];
+        init => _sections[InstrumentKind.SpectrumAnalyser] = value;
+    }
+
+    /// <summary>Signal-generator commands (disabled by default): the section of <see cref="InstrumentKind.SignalGenerator"/>.</summary>
+    public ScpiGeneratorCommands Generator
+    {
+        get => (ScpiGeneratorCommands)_sections[InstrumentKind.SignalGenerator];
+        init => _sections[InstrumentKind.SignalGenerator] = value;
+    }
+
+    /// <summary>
+    /// Every kind's section, the built-in kinds' first. Setting it adds the sections it holds, or
+    /// replaces those of kinds already present; the others stay.
+    /// </summary>
+    public IReadOnlyDictionary<InstrumentKind, IScpiCommandSection> Sections
+    {
+        get => _sections;
+        init
+        {
+            ArgumentNullException.ThrowIfNull(value);
+            foreach (var (kind, section) in value)
+            {
+                _sections[kind] = section;
+            }
+        }
+    }
 
     /// <summary>
     /// Starts one sweep; the adapter then waits with <c>*OPC?</c> before fetching data. Required
@@ -54,19 +105,22 @@ public sealed class ScpiCommandSet
     public bool IdentificationOnly { get; init; }
 
     /// <summary>True when a capability that fetches traces is enabled.</summary>
-    public bool FetchesTraces => Network.Enabled || Spectrum.Enabled;
+    public bool FetchesTraces => _sections.Values.Any(s => s is { Enabled: true, FetchesTraces: true });
 
     /// <summary>Every problem found, each as <c>where: what</c> (e.g. <c>network.start: ...</c>); empty when valid.</summary>
     public IReadOnlyList<string> Problems()
     {
         var problems = new List<string>();
-        if (Network is null || Spectrum is null || Generator is null)
+        // A section set to null! from code would fail later with a less helpful message.
+        var missing = _sections.Where(s => s.Value is null).Select(s => s.Key.Word).ToList();
+        if (missing.Count > 0)
         {
-            problems.Add("the network, spectrum and generator sections must not be null");
+            problems.Add($"the sections must not be null; null: {string.Join(", ", missing)}");
             return problems;
         }
 
-        bool anyEnabled = Network.Enabled || Spectrum.Enabled || Generator.Enabled;
+        var enabled = _sections.Values.Where(s => s.Enabled).ToList();
+        bool anyEnabled = enabled.Count > 0;
         if (!anyEnabled && !IdentificationOnly)
         {
             problems.Add("no capability is enabled; enable network, spectrum or generator (or set identificationOnly when that is meant)");
@@ -76,19 +130,9 @@ public sealed class ScpiCommandSet
             problems.Add("identificationOnly: a capability is enabled as well; an identification-only set enables none");
         }
 
-        if (Network.Enabled)
+        foreach (var section in enabled)
         {
-            Network.CollectProblems(problems);
-        }
-
-        if (Spectrum.Enabled)
-        {
-            Spectrum.CollectProblems(problems);
-        }
-
-        if (Generator.Enabled)
-        {
-            Generator.CollectProblems(problems);
+            section.CollectProblems(problems);
         }
 
         if (!Enum.IsDefined(DataFormat))

@@ -4,7 +4,7 @@ namespace BenchRunner.Instruments.Scpi;
 /// The commands of the signal-generator capability. Defaults follow the SCPI-1999 SOURce and
 /// OUTPut subsystems; real instruments differ, so a driver profile overrides what its instrument needs.
 /// </summary>
-public sealed class ScpiGeneratorCommands
+public sealed class ScpiGeneratorCommands : IScpiCommandSection
 {
     /// <summary>Whether the instrument is a signal generator. Default false.</summary>
     public bool Enabled { get; init; }
@@ -18,7 +18,10 @@ public sealed class ScpiGeneratorCommands
     /// <summary>Switches the RF output. Required. Default <c>OUTPut:STATe {state}</c> (sent as ON or OFF).</summary>
     public string? Output { get; init; } = "OUTPut:STATe {state}";
 
-    internal void CollectProblems(List<string> problems)
+    /// <inheritdoc/>
+    public bool FetchesTraces => false;
+
+    void IScpiCommandSection.CollectProblems(ICollection<string> problems)
     {
         const string at = "generator";
         ScpiCommandChecks.Check(problems, $"{at}.frequency", Frequency, ScpiPlaceholder.Hz, required: true);

@@ -9,8 +9,9 @@ namespace BenchRunner.Instruments.Scpi;
 
 /// <summary>
 /// An IEEE 488.2 / SCPI instrument whose commands come from a <see cref="ScpiCommandSet"/>. It offers
-/// <see cref="INetworkAnalyser"/>, <see cref="ISpectrumAnalyser"/> and <see cref="ISignalGenerator"/>
-/// through <see cref="GetCapability{T}"/>, each only when the command set enables it.
+/// the capability of each kind whose section the command set enables (<see cref="INetworkAnalyser"/>,
+/// <see cref="ISpectrumAnalyser"/>, <see cref="ISignalGenerator"/>, or a registered kind's) through
+/// <see cref="GetCapability{T}"/>, each built by its <see cref="Kinds.InstrumentKind"/>.
 /// <para>
 /// Connecting opens the session, sends <c>*CLS</c>, reads <c>*IDN?</c>, sends <c>*RST</c> only when
 /// <see cref="ScpiInstrumentOptions.ResetOnConnect"/> is set, and selects the data format and byte
@@ -20,9 +21,7 @@ namespace BenchRunner.Instruments.Scpi;
 /// </summary>
 public sealed class ScpiInstrument : IInstrument
 {
-    private readonly ScpiNetworkAnalyser? _network;
-    private readonly ScpiSpectrumAnalyser? _spectrum;
-    private readonly ScpiSignalGenerator? _generator;
+    private readonly IReadOnlyList<object> _capabilities;
 
     /// <summary>Creates the instrument; nothing is sent until <see cref="ConnectAsync"/>.</summary>
     /// <param name="name">The bench name, e.g. <c>vna</c>.</param>
@@ -44,9 +43,7 @@ public sealed class ScpiInstrument : IInstrument
         Limits = limits ?? InstrumentLimits.None;
         Session = new ScpiSession(name, transport, Options.Session, Options.Framing, timeProvider);
         Name = name;
-        _network = commands.Network.Enabled ? new ScpiNetworkAnalyser(this, commands.Network) : null;
-        _spectrum = commands.Spectrum.Enabled ? new ScpiSpectrumAnalyser(this, commands.Spectrum) : null;
-        _generator = commands.Generator.Enabled ? new ScpiSignalGenerator(this, commands.Generator) : null;
+        _capabilities = [.. commands.Sections.Where(s => s.Value.Enabled).Select(s => s.Key.ScpiCapability(this, s.Value))];
     }
 
     /// <inheritdoc/>
@@ -106,7 +103,7 @@ public sealed class ScpiInstrument : IInstrument
     }
 
     /// <inheritdoc/>
-    public T? GetCapability<T>() where T : class => _network as T ?? _spectrum as T ?? _generator as T;
+    public T? GetCapability<T>() where T : class => _capabilities.OfType<T>().FirstOrDefault();
 
     /// <inheritdoc/>
     public ValueTask DisposeAsync() => Session.DisposeAsync();
@@ -191,7 +188,8 @@ public sealed class ScpiInstrument : IInstrument
     }
 
     /// <summary>Refuses a frequency outside the declared range.</summary>
-    internal void CheckFrequency(Frequency frequency, string what)
+    /// <exception cref="ArgumentOutOfRangeException">The frequency is outside <see cref="Limits"/>' range.</exception>
+    public void CheckFrequency(Frequency frequency, string what)
     {
         if (Limits.FrequencyRange is { } range && !range.Contains(frequency))
         {

@@ -7,7 +7,7 @@ namespace BenchRunner.Instruments.Scpi;
 /// (SENSe, TRACe); real instruments differ, so a driver profile overrides what its instrument needs.
 /// A null optional command means the instrument cannot take that setting, and asking for it is refused.
 /// </summary>
-public sealed class ScpiNetworkCommands
+public sealed class ScpiNetworkCommands : IScpiCommandSection
 {
     /// <summary>Whether the instrument is a network analyser. Default false.</summary>
     public bool Enabled { get; init; }
@@ -51,7 +51,10 @@ public sealed class ScpiNetworkCommands
     /// </summary>
     public string? FrequencyListQuery { get; init; }
 
-    internal void CollectProblems(List<string> problems)
+    /// <inheritdoc/>
+    public bool FetchesTraces => true;
+
+    void IScpiCommandSection.CollectProblems(ICollection<string> problems)
     {
         const string at = "network";
         ScpiCommandChecks.Check(problems, $"{at}.start", Start, ScpiPlaceholder.Hz, required: true);

@@ -5,7 +5,7 @@ namespace BenchRunner.Instruments.Scpi;
 /// (SENSe, INPut, DISPlay, TRACe); real instruments differ, so a driver profile overrides what its
 /// instrument needs. A null optional command means the instrument cannot take that setting.
 /// </summary>
-public sealed class ScpiSpectrumCommands
+public sealed class ScpiSpectrumCommands : IScpiCommandSection
 {
     /// <summary>Whether the instrument is a spectrum analyser. Default false.</summary>
     public bool Enabled { get; init; }
@@ -46,7 +46,10 @@ public sealed class ScpiSpectrumCommands
     /// </summary>
     public string? FrequencyListQuery { get; init; }
 
-    internal void CollectProblems(List<string> problems)
+    /// <inheritdoc/>
+    public bool FetchesTraces => true;
+
+    void IScpiCommandSection.CollectProblems(ICollection<string> problems)
     {
         const string at = "spectrum";
         ScpiCommandChecks.Check(problems, $"{at}.start", Start, ScpiPlaceholder.Hz, required: true);

@@ -1,6 +1,7 @@
 using BenchRunner.Core.Diagnostics;
 using BenchRunner.Execution.Bench;
-using BenchRunner.Instruments.Profiles;
+using BenchRunner.Instruments.Adapters;
+using BenchRunner.Instruments.Kinds;
 
 namespace BenchRunner.Execution.Tests.Bench;
 
@@ -65,7 +66,7 @@ public sealed class BenchFileTests
                 connection: tcp:192.0.2.10:5025
             """, Source, ".");
 
-        Assert.Equal(BenchAdapter.Scpi, bench.Instruments["gen"].Adapter);
+        Assert.Equal(AdapterKind.Scpi, bench.Instruments["gen"].Adapter);
         Assert.Null(bench.Instruments["gen"].MaxOutputLevel);
     }
 

@@ -2,7 +2,7 @@ using BenchRunner.Core.Diagnostics;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;
 using BenchRunner.Execution.Plans;
-using BenchRunner.Instruments.Profiles;
+using BenchRunner.Instruments.Kinds;
 
 namespace BenchRunner.Execution.Tests.Plans;
 

@@ -1,5 +1,6 @@
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;
+using BenchRunner.Instruments.Kinds;
 using BenchRunner.Instruments.Profiles;
 
 namespace BenchRunner.Instruments.Tests.Profiles;

@@ -1,5 +1,7 @@
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;
+using BenchRunner.Instruments.Adapters;
+using BenchRunner.Instruments.Kinds;
 using BenchRunner.Instruments.Profiles;
 using BenchRunner.Instruments.Scpi;
 using static BenchRunner.Instruments.Tests.Profiles.ScpiProfileText;
