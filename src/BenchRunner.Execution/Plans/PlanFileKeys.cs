@@ -55,8 +55,6 @@ internal static class PlanFileKeys
     public const int MaxPasses = 1_000_000;
 
     public static readonly IReadOnlyList<string> Top = [Plan, Description, Roles, Steps];
-    public static readonly IReadOnlyList<string> StepWords = [.. StepKinds.All.Select(k => k.Word)];
-    public static readonly IReadOnlyList<string> StepKeys = [Name, .. StepWords];
     public static readonly IReadOnlyList<string> NetworkKeys = [Role, Start, Stop, Points, IfBandwidth];
     public static readonly IReadOnlyList<string> SpectrumKeys = [Role, Start, Stop, Centre, Span, Rbw, Attenuation, ReferenceLevel];
     public static readonly IReadOnlyList<string> GeneratorKeys = [Role, FrequencyKey, LevelKey, Output];

@@ -21,19 +21,26 @@ internal sealed partial class PlanFileReader
     private readonly Dictionary<string, NamedTrace> _traces = new(StringComparer.Ordinal);
     private readonly Dictionary<string, SourceLocation> _names = new(StringComparer.Ordinal);
 
-    private PlanFileReader(string source, string folder)
+    private readonly PlanVocabulary _vocabulary;
+    private readonly IReadOnlyList<string> _stepWords;
+    private readonly IReadOnlyList<string> _stepKeys;
+
+    private PlanFileReader(string source, string folder, PlanVocabulary vocabulary)
     {
         _problems = new YamlProblems(source);
         _source = source;
         _folder = folder;
+        _vocabulary = vocabulary;
+        _stepWords = vocabulary.StepWords;
+        _stepKeys = [Name, .. _stepWords];
     }
 
-    public static TestPlan Read(string text, string source, string folder)
+    public static TestPlan Read(string text, string source, string folder, PlanVocabulary vocabulary)
     {
         var root = YamlTreeReader.Read(text, source)
             ?? throw new InputFormatException(new SourceLocation(source, 1, 1),
                 "the file holds no plan; expected keys such as \"plan:\", \"roles:\" and \"steps:\"");
-        var reader = new PlanFileReader(source, folder);
+        var reader = new PlanFileReader(source, folder, vocabulary);
         var plan = reader.ReadPlan(root);
         reader._problems.ThrowIfAny();
         return plan ?? throw new InvalidOperationException("A plan with no problems was not built.");
@@ -89,11 +96,11 @@ internal sealed partial class PlanFileReader
             if (kindItem is not YamlText { IsNull: false } text)
             {
                 _problems.Add(kindItem is YamlText ? key.Location : kindItem.Location,
-                    $"expected the kind of role \"{role}\": {string.Join(", ", InstrumentKindWords.All.Select(k => k.Word))}; found {StrictMap.Describe(kindItem)}");
+                    $"expected the kind of role \"{role}\": {string.Join(", ", _vocabulary.Kinds.Words.Select(k => k.Word))}; found {StrictMap.Describe(kindItem)}");
                 continue;
             }
 
-            if (InstrumentKindWords.WordOf(text, role, _problems) is { } kind)
+            if (_vocabulary.Kinds.WordOf(text, role, _problems) is { } kind)
             {
                 _roles[role] = new RoleRequirement(role, kind, key.Location);
             }
@@ -116,17 +123,17 @@ internal sealed partial class PlanFileReader
 
     private PlanStep? ReadStep(YamlItem item)
     {
-        var map = StrictMap.Open(item, "a step", StepKeys, _problems);
+        var map = StrictMap.Open(item, "a step", _stepKeys, _problems);
         if (map is null)
         {
             return null;
         }
 
-        var words = StepWords.Where(map.Has).ToList();
+        var words = _stepWords.Where(map.Has).ToList();
         if (words.Count != 1)
         {
             _problems.Add(words.Count == 0 ? map.MissingAt : map.Key(words[1])!.Location, words.Count == 0
-                ? $"a step needs one of {string.Join(", ", StepWords)}"
+                ? $"a step needs one of {string.Join(", ", _stepWords)}"
                 : $"a step does one thing; this one has both \"{words[0]}\" and \"{words[1]}\" (start a new list item with \"- \")");
             return null;
         }
@@ -145,8 +152,17 @@ internal sealed partial class PlanFileReader
             Wait => map.Parsed(Wait, DurationText.Parse) is { } d ? new WaitStep(name, at, d) : null,
             Message => map.Text(Message) is { } m ? new MessageStep(name, at, m.Value.Trim()) : null,
             CheckOverload => ReadOverloadCheck(map, name, at),
-            _ => ReadRepeat(map, name, at),
+            Repeat => ReadRepeat(map, name, at),
+            _ => ReadOwnStep(map, word, name, at),
         };
+    }
+
+    /// <summary>A step of a kind added to the vocabulary, read by the kind itself.</summary>
+    private PlanStep? ReadOwnStep(StrictMap map, string word, string? name, SourceLocation at)
+    {
+        var kind = _vocabulary.Steps.First(s => s.Word == word);
+        var reading = new StepReading(map, kind, name, at, _problems, (body, step, kinds) => ReadRole(body, step, kinds));
+        return kind.Read!(reading);
     }
 
     private string? ReadName(StrictMap map)

@@ -11,6 +11,13 @@ namespace BenchRunner.Execution.Plans;
 /// </param>
 public sealed record StepKind(string Word, bool DrivesInstrument)
 {
+    /// <summary>
+    /// Reads a step of this kind from a plan file, or null for the built-in kinds (the plan reader
+    /// knows them). A reader adds every problem to <see cref="StepReading.Problems"/> and returns null
+    /// rather than throwing. A kind with a reader joins a plan vocabulary with <see cref="PlanVocabulary.WithStep"/>.
+    /// </summary>
+    public Func<StepReading, PlanStep?>? Read { get; init; }
+
     /// <inheritdoc/>
     public override string ToString() => Word;
 }

@@ -13,11 +13,13 @@ public static class RunPreparation
 {
     /// <summary>Reads and checks a bench file.</summary>
     /// <exception cref="InputFormatException">A problem in the file (every one, located).</exception>
-    public static PreparedBench LoadBench(string benchPath)
+    /// <param name="benchPath">The bench file.</param>
+    /// <param name="vocabulary">The kinds of instrument it may name; <see cref="PlanVocabulary.BuiltIn"/>'s when null.</param>
+    public static PreparedBench LoadBench(string benchPath, PlanVocabulary? vocabulary = null)
     {
         ArgumentException.ThrowIfNullOrEmpty(benchPath);
         var text = InputFile.ReadAllText(benchPath);
-        return new PreparedBench(BenchFile.Parse(text, benchPath, FolderOf(benchPath)), text);
+        return new PreparedBench(BenchFile.Parse(text, benchPath, FolderOf(benchPath), (vocabulary ?? PlanVocabulary.BuiltIn).Kinds), text);
     }
 
     /// <summary>
@@ -25,13 +27,16 @@ public static class RunPreparation
     /// together; problems of both files are reported at once.
     /// </summary>
     /// <exception cref="InputFormatException">Any problem in either file or between them.</exception>
-    public static PreparedRun Load(string planPath, string? benchPath)
+    /// <param name="planPath">The plan file.</param>
+    /// <param name="benchPath">The bench file, or null to check the plan on its own.</param>
+    /// <param name="vocabulary">The kinds of instrument and step both may use; <see cref="PlanVocabulary.BuiltIn"/> when null.</param>
+    public static PreparedRun Load(string planPath, string? benchPath, PlanVocabulary? vocabulary = null)
     {
         ArgumentException.ThrowIfNullOrEmpty(planPath);
         var problems = new List<InputProblem>();
         var planText = Collect(() => InputFile.ReadAllText(planPath), problems);
-        var plan = planText is null ? null : Collect(() => PlanFile.Parse(planText, planPath, FolderOf(planPath)), problems);
-        var bench = benchPath is null ? null : Collect(() => LoadBench(benchPath), problems);
+        var plan = planText is null ? null : Collect(() => PlanFile.Parse(planText, planPath, FolderOf(planPath), vocabulary), problems);
+        var bench = benchPath is null ? null : Collect(() => LoadBench(benchPath, vocabulary), problems);
         if (plan is not null && bench is not null)
         {
             problems.AddRange(PlanValidator.CheckAgainstBench(plan, bench.Definition));
@@ -51,10 +56,11 @@ public static class RunPreparation
     /// <param name="folder">Where the plan's relative paths (masks) are found.</param>
     /// <param name="bench">The bench.</param>
     /// <exception cref="InputFormatException">Any problem in the plan or between it and the bench.</exception>
-    public static PreparedRun FromText(string planText, string sourceName, string folder, PreparedBench bench)
+    /// <param name="vocabulary">The kinds of instrument and step the plan may use; <see cref="PlanVocabulary.BuiltIn"/> when null.</param>
+    public static PreparedRun FromText(string planText, string sourceName, string folder, PreparedBench bench, PlanVocabulary? vocabulary = null)
     {
         ArgumentNullException.ThrowIfNull(bench);
-        var plan = PlanFile.Parse(planText, sourceName, folder);
+        var plan = PlanFile.Parse(planText, sourceName, folder, vocabulary);
         return Checked(plan, planText, bench);
     }
 

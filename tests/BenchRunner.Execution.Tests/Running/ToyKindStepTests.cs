@@ -1,7 +1,7 @@
 using BenchRunner.Core.Diagnostics;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Runs;
-using BenchRunner.Execution.Bench;
+using BenchRunner.Execution.Preparation;
 using BenchRunner.Execution.Plans;
 using BenchRunner.Execution.Running;
 using BenchRunner.Execution.Tests.Support;
@@ -22,13 +22,29 @@ namespace BenchRunner.Execution.Tests.Running;
 public sealed class ToyKindStepTests
 {
     private static readonly InstrumentKindRegistry Kinds = InstrumentKindRegistry.BuiltIn.AddStepAttenuator();
-    private static readonly SourceLocation At = SourceLocation.OfFile("built in the test");
+    private static readonly PlanVocabulary Vocabulary = PlanVocabulary.BuiltIn.WithKinds(Kinds).WithStep(SetAttenuationStep.SetAttenuator);
 
     /// <summary>A step of the toy kind: set the attenuation, read it back, judge the read-back.</summary>
     private sealed record SetAttenuationStep(string? Name, SourceLocation Location, string Role, Ratio Attenuation)
         : PlanStep(Name, Location), IInstrumentStep
     {
-        public static readonly StepKind SetAttenuator = new("set-attenuator", DrivesInstrument: true);
+        public static readonly StepKind SetAttenuator = new("set-attenuator", DrivesInstrument: true) { Read = ReadStep };
+
+        private static readonly string[] Keys = ["role", "attenuation"];
+
+        /// <summary>Reads <c>set-attenuator: { role: att, attenuation: 30 dB }</c>.</summary>
+        private static PlanStep? ReadStep(StepReading reading)
+        {
+            var body = reading.Body(Keys);
+            if (body is null)
+            {
+                return null;
+            }
+
+            var role = reading.Role(body, StepAttenuatorKind.Instance);
+            var attenuation = body.Parsed("attenuation", Ratio.Parse, "the attenuation to set, e.g. \"30 dB\"");
+            return role is null || attenuation is null ? null : new SetAttenuationStep(reading.Name, reading.At, role, attenuation.Value);
+        }
 
         public override StepKind Kind => SetAttenuator;
 
@@ -57,7 +73,7 @@ public sealed class ToyKindStepTests
               query: att?
               reply: '^att (?<db>\d+)$'
             """);
-        var bench = BenchFile.Parse("""
+        var benchPath = dir.Write("bench.yaml", """
             bench: toy-bench
             instruments:
               att:
@@ -65,18 +81,24 @@ public sealed class ToyKindStepTests
                 adapter: profile
                 profile: att.yaml
                 connection: sim:att
-            """, "bench.yaml", dir.Path, Kinds);
+            """);
+        var planPath = dir.Write("plan.yaml", """
+            plan: toy
+            roles: { att: step-attenuator }
+            steps:
+              - name: thirty
+                set-attenuator: { role: att, attenuation: 30 dB }
+            """);
+        var prepared = RunPreparation.Load(planPath, benchPath, Vocabulary);
         var (host, device) = InMemoryTransport.CreatePair("att");
         var dialect = new Dialect();
         await using var peer = new ScriptedPeer(device, "\n", dialect.Handle);
         var transports = new TransportFactory().Register(ConnectionSpec.SimulatorScheme, _ => host);
         using var store = SqliteResultStore.Open(dir.PathOf("runs.db"));
-        var plan = new TestPlan("toy", null, [new RoleRequirement("att", StepAttenuatorKind.Instance, At)],
-            [new SetAttenuationStep("thirty", At, "att", Ratio.FromDecibels(30))], "built in the test");
         var events = new CollectingObserver();
 
-        var outcome = await new RunLauncher(new PlanRunner(bench, transports), store)
-            .RunAsync(plan, VirtualRuns.Context(), events, CancellationToken.None).WaitAsync(VirtualRuns.Limit);
+        var outcome = await prepared.Launcher(transports, store)
+            .RunAsync(prepared.Plan, prepared.Context("0.1.0", "test-host"), events, CancellationToken.None).WaitAsync(VirtualRuns.Limit);
 
         Assert.True(outcome.Status == RunStatus.Passed, outcome.Error);
         Assert.Equal(["att 30", "att?"], peer.Received);
@@ -87,6 +109,42 @@ public sealed class ToyKindStepTests
         var check = Assert.Single(store.GetChecks(outcome.RunId!.Value));
         Assert.Equal("attenuation of att", check.Record.Name);
         Assert.True(check.Record.Passed);
+        Assert.Equal(File.ReadAllText(planPath), store.GetRun(outcome.RunId!.Value)!.Record.PlanText);
+    }
+
+    [Fact]
+    public void Parse_TheToyStepWithAProblem_IsReportedAtItsPlaceByTheKindsReader()
+    {
+        var error = Assert.Throws<InputFormatException>(() => PlanFile.Parse("""
+            plan: toy
+            roles: { att: step-attenuator, vna: network-analyser }
+            steps:
+              - set-attenuator: { role: vna, attenuation: thirty }
+            """, "plan.yaml", ".", Vocabulary));
+
+        Assert.Contains(error.Problems, p => p.Location.Line == 4 && p.Detail.Contains("\"set-attenuator\" needs a step-attenuator", StringComparison.Ordinal));
+        Assert.Contains(error.Problems, p => p.Location == new SourceLocation("plan.yaml", 4, 47) && p.Detail.Contains("expected a ratio", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Parse_TheToyStepWithoutItsVocabulary_IsAnUnknownStepAndTheToyKindAnUnknownKind()
+    {
+        var error = Assert.Throws<InputFormatException>(() => PlanFile.Parse("""
+            plan: toy
+            roles: { att: step-attenuator }
+            steps:
+              - set-attenuator: { role: att, attenuation: 30 dB }
+            """, "plan.yaml", "."));
+
+        Assert.Contains(error.Problems, p => p.Location.Line == 2 && p.Detail.Contains("unknown value \"step-attenuator\"", StringComparison.Ordinal));
+        Assert.Contains(error.Problems, p => p.Location.Line == 4 && p.Detail.Contains("set-attenuator", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void WithStep_AStepWithoutAReaderOrAWordTaken_IsRefused()
+    {
+        Assert.Throws<ArgumentException>(() => PlanVocabulary.BuiltIn.WithStep(new StepKind("set-attenuator", true)));
+        Assert.Throws<ArgumentException>(() => PlanVocabulary.BuiltIn.WithStep(StepKinds.Sweep with { Read = _ => null }));
     }
 
     private sealed class Dialect
