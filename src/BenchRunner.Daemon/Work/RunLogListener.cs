@@ -9,26 +9,23 @@ namespace BenchRunner.Daemon.Work;
 internal sealed class RunLogListener(ILogger log, PlanJob job, int attempt, StatusBoard status, TimeProvider time) : IRunListener
 {
     private readonly string _instruments = string.Join(", ", job.Instruments);
-    private long _runId = -1;
+    private readonly TaskCompletionSource<long?> _recorded = new(TaskCreationOptions.RunContinuationsAsynchronously);
 
     /// <summary>The run's id in the store, once its start is recorded.</summary>
-    public long? RunId => Interlocked.Read(ref _runId) is >= 0 and var id ? id : null;
+    public long? RunId => _recorded.Task.IsCompletedSuccessfully ? _recorded.Task.Result : null;
 
-    /// <summary>Told by the recorder that the run's start is stored: logs the start with its id.</summary>
-    public void Recorded(long runId)
-    {
-        Interlocked.Exchange(ref _runId, runId);
-        DaemonLog.RunStarted(log, runId, job.Id, job.Plan.Name, _instruments, attempt);
-        status.UpdateJob(job.Id, j => j with { RunId = runId });
-    }
+    /// <summary>Told once whether (and as what) the run's start is stored; the log's lines wait for it, so each carries the id.</summary>
+    public void Recorded(long? runId) => _recorded.TrySetResult(runId);
 
     /// <inheritdoc/>
-    public ValueTask OnEventAsync(RunEvent runEvent, CancellationToken cancellationToken)
+    public async ValueTask OnEventAsync(RunEvent runEvent, CancellationToken cancellationToken)
     {
+        var runId = await _recorded.Task.WaitAsync(cancellationToken).ConfigureAwait(false);
         switch (runEvent)
         {
             case RunStarted:
-                status.UpdateJob(job.Id, j => j with { StartedUtc = time.GetUtcNow(), Attempt = attempt, WaitingFor = null });
+                DaemonLog.RunStarted(log, runId, job.Id, job.Plan.Name, _instruments, attempt);
+                status.UpdateJob(job.Id, j => j with { StartedUtc = time.GetUtcNow(), RunId = runId, Attempt = attempt, WaitingFor = null });
                 break;
             case StepStarted step:
                 status.UpdateJob(job.Id, j => j with { Step = step.Step });
@@ -43,7 +40,5 @@ internal sealed class RunLogListener(ILogger log, PlanJob job, int attempt, Stat
                 DaemonLog.OperatorMessage(log, RunId, _instruments, message.Text);
                 break;
         }
-
-        return ValueTask.CompletedTask;
     }
 }

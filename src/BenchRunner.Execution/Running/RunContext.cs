@@ -40,6 +40,9 @@ public sealed record RunContext(string PlanText, string? BenchText, string Softw
     /// </summary>
     public CancellationToken StopAtNextStep { get; init; }
 
-    /// <summary>Told the run's id in the result store as soon as its start is recorded (a status board, a log), or null.</summary>
-    public Action<long>? Recorded { get; init; }
+    /// <summary>
+    /// Told the run's id in the result store as soon as its start is recorded (a status board, a log),
+    /// or null when the start could not be recorded or nothing is recorded. Called once.
+    /// </summary>
+    public Action<long?>? Recorded { get; init; }
 }

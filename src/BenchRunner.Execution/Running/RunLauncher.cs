@@ -36,11 +36,15 @@ public sealed class RunLauncher(PlanRunner runner, IResultWriter? results)
             recorder = new RunRecorder(results);
             if (context.Recorded is { } told)
             {
-                _ = recorder.RunId.ContinueWith(t => told(t.Result), CancellationToken.None,
-                    TaskContinuationOptions.OnlyOnRanToCompletion | TaskContinuationOptions.ExecuteSynchronously, TaskScheduler.Default);
+                _ = recorder.RunId.ContinueWith(t => told(t.IsCompletedSuccessfully ? t.Result : null), CancellationToken.None,
+                    TaskContinuationOptions.ExecuteSynchronously, TaskScheduler.Default);
             }
 
             events.Subscribe(recorder, RunListenerOptions.Recorder());
+        }
+        else
+        {
+            context.Recorded?.Invoke(null);
         }
 
         foreach (var subscription in listeners ?? [])

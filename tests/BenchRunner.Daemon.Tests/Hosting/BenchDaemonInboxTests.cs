@@ -43,6 +43,11 @@ public sealed class BenchDaemonInboxTests
         var verdict = Assert.Single(rig.Log.Named("CheckVerdict"));
         Assert.Equal(finished.RunId, (long?)verdict.Values["RunId"]);
         Assert.Equal("vna", verdict.Values["Instruments"]);
+        // The start is logged first, with the id the recorder gave the run, though recording runs on its own loop.
+        var events = rig.Log.Events.ToList();
+        var started = Assert.Single(events, e => e.Id.Name == "RunStarted");
+        Assert.Equal(finished.RunId, (long?)started.Values["RunId"]);
+        Assert.True(events.IndexOf(started) < events.FindIndex(e => e.Id.Name == "SweepStored"));
     }
 
     [Fact]
