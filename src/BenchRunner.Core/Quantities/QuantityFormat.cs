@@ -85,6 +85,30 @@ public static class QuantityFormat
             : Join(Scaled(value, QuantityUnit.None.SignificantDigits, [], ""), unitSymbol!);
 
     /// <summary>
+    /// The place value of the last digit <see cref="Format(double, QuantityUnit)"/> shows of
+    /// <paramref name="value"/>, in the unit itself: 100 for 137.5642 MHz, 0.01 for any dB, 0.1
+    /// for a Q of 45.7. A change smaller than half of it cannot be seen in the text. Zero for a zero value.
+    /// </summary>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="value"/> is NaN or infinite.</exception>
+    public static double Resolution(double value, QuantityUnit unit)
+    {
+        ArgumentNullException.ThrowIfNull(unit);
+        RequireFinite(value);
+        if (unit.IsLogarithmic)
+        {
+            return Math.Pow(10, -LogarithmicDecimals);
+        }
+
+        if (value == 0)
+        {
+            return 0;
+        }
+
+        var scale = unit.Prefixes.Count == 0 ? 1 : Prefix(Math.Abs(value), unit.Prefixes).Scale;
+        return scale * Math.Pow(10, -Decimals(value / scale, unit.SignificantDigits));
+    }
+
+    /// <summary>
     /// Scales <paramref name="value"/> to the fitting prefix of <paramref name="prefixes"/> (largest
     /// first; none for a plain number) and rounds it to <paramref name="significant"/> digits.
     /// </summary>
@@ -96,17 +120,7 @@ public static class QuantityFormat
             return Join(Number(RoundSignificant(value, significant)), symbol);
         }
 
-        var magnitude = Math.Abs(value);
-        var index = prefixes.Count - 1;
-        for (var i = 0; i < prefixes.Count; i++)
-        {
-            if (magnitude >= prefixes[i].Scale)
-            {
-                index = i;
-                break;
-            }
-        }
-
+        var index = Prefix(Math.Abs(value), prefixes).Index;
         var rounded = RoundSignificant(value / prefixes[index].Scale, significant);
         if (Math.Abs(rounded) >= 1000 && index > 0 && prefixes[index - 1].Scale == 1000 * prefixes[index].Scale)
         {
@@ -122,16 +136,26 @@ public static class QuantityFormat
     private static string WithSign(string text) =>
         text.StartsWith('-') || !text.TakeWhile(c => c != ' ').Any(c => c is >= '1' and <= '9') ? text : "+" + text;
 
-    private static double RoundSignificant(double value, int significant)
+    // The largest prefix not above the magnitude, or the smallest one.
+    private static (int Index, double Scale) Prefix(double magnitude, IReadOnlyList<(double Scale, string Prefix)> prefixes)
     {
-        if (value == 0)
+        for (var i = 0; i < prefixes.Count; i++)
         {
-            return 0;
+            if (magnitude >= prefixes[i].Scale)
+            {
+                return (i, prefixes[i].Scale);
+            }
         }
 
-        var decimals = significant - 1 - (int)Math.Floor(Math.Log10(Math.Abs(value)));
-        return RoundAt(value, Math.Clamp(decimals, 0, 15));
+        return (prefixes.Count - 1, prefixes[^1].Scale);
     }
+
+    private static double RoundSignificant(double value, int significant) =>
+        value == 0 ? 0 : RoundAt(value, Decimals(value, significant));
+
+    // Decimals that leave `significant` digits, never fewer than the whole digits, at most 15 (Math.Round's limit).
+    private static int Decimals(double value, int significant) =>
+        Math.Clamp(significant - 1 - (int)Math.Floor(Math.Log10(Math.Abs(value))), 0, 15);
 
     // Math.Round accepts 0 to 15 decimals; adding zero turns a negative zero into zero.
     private static double RoundAt(double value, int decimals) =>

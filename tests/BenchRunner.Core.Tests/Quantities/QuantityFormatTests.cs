@@ -111,4 +111,18 @@ public class QuantityFormatTests
         Assert.Equal("159.2 ns", QuantityFormat.Format(Quantity.Of(159.2e-9, QuantityUnit.Second)));
         Assert.Equal("-4.41 dB", Quantity.Of(-4.41, QuantityUnit.Decibel).ToString());
     }
+
+    [Theory]
+    [InlineData(137.5642e6, "Hz", 100)]
+    [InlineData(2.5e3, "Hz", 0.001)]
+    [InlineData(159.2e-9, "s", 1e-10)]
+    [InlineData(-4.41, "dB", 0.01)]
+    [InlineData(-120.5, "dBm", 0.01)]
+    [InlineData(45.7, "", 0.01)]
+    [InlineData(12345.6, "", 1)]
+    [InlineData(0, "Hz", 0)]
+    public void Resolution_Value_IsThePlaceOfTheLastDigitShown(double value, string unit, double expected)
+    {
+        Assert.Equal(expected, QuantityFormat.Resolution(value, QuantityUnit.FromSymbol(unit)!), expected * 1e-9);
+    }
 }
