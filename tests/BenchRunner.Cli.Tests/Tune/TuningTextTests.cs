@@ -25,6 +25,22 @@ public sealed class TuningTextTests
         Assert.Equal("±0 dB", TuningText.Change(Row(FigureKeys.InsertionLoss, 2.5, -0.001)));
 
     [Fact]
+    public void Change_FloatingPointNoiseOnAFrequency_IsBelowTheValuesResolution() =>
+        Assert.Equal("±0 Hz", TuningText.Change(Row(FigureKeys.CentreFrequency, 137.5e6, 1e-7)));
+
+    [Fact]
+    public void Change_LevelInDbm_IsARatioInDb() =>
+        Assert.Equal("+0.25 dB", TuningText.Change(Row(FigureKeys.NoiseFloor, -110, 0.25)));
+
+    [Fact]
+    public void Value_MaskMargin_HasItsSign()
+    {
+        Assert.Equal("+0.6 dB", TuningText.Value(Row(FigureKeys.MaskMargin, 0.6, null)));
+        Assert.Equal("137.5642 MHz", TuningText.Value(Row(FigureKeys.CentreFrequency, 137.56423e6, null)));
+        Assert.Equal("-", TuningText.Value(Row(FigureKeys.LoadedQ, null, null)));
+    }
+
+    [Fact]
     public void Target_TargetWithTolerance_ReadsAsPlusMinus() =>
         Assert.Equal("137.5 MHz ± 300 kHz", TuningText.Target(Row(FigureKeys.CentreFrequency, 137.5e6, null, new FigureLimit(FigureKeys.CentreFrequency, 137.2e6, 137.8e6, 137.5e6, Here))));
 
