@@ -98,7 +98,7 @@ public static class DemoCommand
     {
         writer.WriteLine();
         writer.WriteLine("Summary");
-        writer.WriteLine($"  {"board",-12}  {"verdict",-7}  {"centre",-13}  {"-3 dB width",-11}  {"loss",-8}  worst mask margin");
+        writer.WriteLine($"  {"board",-12}  {"verdict",-7}  {"centre",-13}  {"-3 dB width",-13}  {"loss",-8}  worst mask margin");
         foreach (var b in boards)
         {
             var verdict = b.Outcome.Status switch
@@ -107,7 +107,7 @@ public static class DemoCommand
                 RunStatus.Failed => Display.Colour("FAIL   ", ConsoleColour.Red, colour),
                 var s => s.ToString().ToUpperInvariant().PadRight(7),
             };
-            writer.WriteLine($"  {b.Serial,-12}  {verdict}  {Cell(b.Figure(FigureKeys.CentreFrequency)),-13}  {Cell(b.Figure(FigureKeys.Bandwidth3Db)),-11}  {Cell(b.Figure(FigureKeys.InsertionLoss)),-8}  {(b.MaskMargin is { } m ? QuantityFormat.Signed(m, QuantityUnit.Decibel) : "-")}");
+            writer.WriteLine($"  {b.Serial,-12}  {verdict}  {Cell(b.Figure(FigureKeys.CentreFrequency)),-13}  {Cell(b.Figure(FigureKeys.Bandwidth3Db)),-13}  {Cell(b.Figure(FigureKeys.InsertionLoss)),-8}  {(b.MaskMargin is { } m ? QuantityFormat.Signed(m, QuantityUnit.Decibel) : "-")}");
             foreach (var failed in b.Outcome.Checks.Where(c => !c.Passed))
             {
                 writer.WriteLine($"      failed: {failed.Name}: {failed.Detail}");

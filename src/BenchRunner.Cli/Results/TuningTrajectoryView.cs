@@ -33,7 +33,7 @@ public static class TuningTrajectoryView
         var first = sweeps[0].Record.AcquiredUtc ?? DateTimeOffset.MinValue;
         writer.WriteLine();
         writer.WriteLine($"  Trajectory ({Counted.Of(sweeps.Count, "sweep")} of the tuning session)");
-        writer.WriteLine($"    {"#",4}  {"time",8}  {"centre",-13}  {"change",-12}  {"loss",-8}  {"-3 dB width",-11}  {"mask margin",-11}  {"checks",-8}  streak");
+        writer.WriteLine($"    {"#",4}  {"time",8}  {"centre",-13}  {"change",-12}  {"loss",-8}  {"-3 dB width",-13}  {"mask margin",-11}  {"checks",-8}  streak");
         double? previousCentre = null;
         int streak = 0;
         foreach (var s in sweeps)
@@ -49,7 +49,7 @@ public static class TuningTrajectoryView
             streak = own.Count > 0 && outside == 0 ? streak + 1 : 0;
             var elapsed = s.Record.AcquiredUtc is { } t ? $"+{(t - first).TotalSeconds.ToString("0.0", CultureInfo.InvariantCulture)} s" : "-";
             var verdict = own.Count == 0 ? "-" : outside == 0 ? "in" : $"{outside} out";
-            writer.WriteLine($"    {s.Sequence,4}  {elapsed,8}  {Cell(Get(FigureKeys.CentreFrequency)),-13}  {change,-12}  {Cell(Get(FigureKeys.InsertionLoss)),-8}  {Cell(Get(FigureKeys.Bandwidth3Db)),-11}  {(mask is { } m ? QuantityFormat.Signed(m, QuantityUnit.Decibel) : "-"),-11}  {verdict,-8}  {streak}");
+            writer.WriteLine($"    {s.Sequence,4}  {elapsed,8}  {Cell(Get(FigureKeys.CentreFrequency)),-13}  {change,-12}  {Cell(Get(FigureKeys.InsertionLoss)),-8}  {Cell(Get(FigureKeys.Bandwidth3Db)),-13}  {(mask is { } m ? QuantityFormat.Signed(m, QuantityUnit.Decibel) : "-"),-11}  {verdict,-8}  {streak}");
         }
     }
 
