@@ -87,7 +87,7 @@ public static class QuantityFormat
     /// <summary>
     /// The place value of the last digit <see cref="Format(double, QuantityUnit)"/> shows of
     /// <paramref name="value"/>, in the unit itself: 100 for 137.5642 MHz, 0.01 for any dB, 0.1
-    /// for a Q of 45.7. A change smaller than half of it cannot be seen in the text. Zero for a zero value.
+    /// for a Q of 45.7 (shown to four significant digits, 45.70). A change smaller than half of it cannot be seen in the text. Zero for a zero value.
     /// </summary>
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="value"/> is NaN or infinite.</exception>
     public static double Resolution(double value, QuantityUnit unit)
@@ -122,7 +122,7 @@ public static class QuantityFormat
 
         var index = Prefix(Math.Abs(value), prefixes).Index;
         var rounded = RoundSignificant(value / prefixes[index].Scale, significant);
-        if (Math.Abs(rounded) >= 1000 && index > 0 && prefixes[index - 1].Scale == 1000 * prefixes[index].Scale)
+        if (Math.Abs(rounded) >= 1000 && index > 0 && Math.Abs(prefixes[index - 1].Scale / prefixes[index].Scale - 1000) < 1e-6)
         {
             // Rounding carried into the next prefix: 999.99996 kHz is 1 MHz, not 1000 kHz.
             index--;

@@ -13,6 +13,8 @@ public class QuantityFormatTests
     [InlineData(159.2449e-9, "s", "159.2 ns")] // 4 significant digits for time
     [InlineData(-2.5e-6, "s", "-2.5 \u00B5s")]
     [InlineData(125, "s", "125 s")] // seconds take no prefix above 1 s
+    [InlineData(999.96e-9, "s", "1 \u00B5s")] // carries from n to µ (scales that are not exact in binary)
+    [InlineData(999.96e-6, "s", "1 ms")]
     [InlineData(137.5642e6, "Hz", "137.5642 MHz")]
     [InlineData(137.56423e6, "Hz", "137.5642 MHz")] // 7 significant digits for frequency
     [InlineData(137.5e6, "Hz", "137.5 MHz")] // trailing zeros dropped
