@@ -114,7 +114,7 @@ public sealed class ResultStoreSweepTests : IDisposable
 
         // The resonator's -3 dB bandwidth is f0 / Q = 3 MHz, about its 137.5 MHz centre.
         // Pozar, Microwave Engineering, ch. 6 (loaded Q of a resonator, Q = f0 / BW).
-        var bandwidth = figures.Single(f => f.Key == "bandwidth_3db_hz").Value!.Value;
+        var bandwidth = figures.Single(f => f.Key == FigureKeys.Bandwidth3Db).Value!.Value.Value;
         Assert.Equal(3e6, bandwidth, 3e6 * 0.01);
         Assert.Equal(bandwidth, (double)StoreFile.Scalar(_store.Path, "SELECT value FROM figures WHERE key = 'bandwidth_3db_hz'")!);
     }
@@ -125,7 +125,7 @@ public sealed class ResultStoreSweepTests : IDisposable
         var runId = _store.StartRun(Samples.Run());
         _store.AddSweep(runId, new SweepRecord("passband", Samples.PassbandS21())
         {
-            Figures = [new NamedFigure("shape_factor_60_3", "Shape factor 60/3 dB", null, "", "the trace never falls 60 dB below its peak")],
+            Figures = [NamedFigure.Unavailable(FigureKeys.ShapeFactor60To3, "the trace never falls 60 dB below its peak")],
         });
 
         var figure = Assert.Single(_store.GetFigures(runId)).Figure;
@@ -172,21 +172,24 @@ public sealed class ResultStoreSweepTests : IDisposable
         var runId = _store.StartRun(Samples.Run());
         var trace = Samples.PassbandS21();
 
+        // A figure with both or neither of value and reason, or an infinite value, cannot even be
+        // made (NamedFigure refuses it at the door); a repeated key is the store's to refuse.
         Assert.Throws<ArgumentException>(() => _store.AddSweep(runId, new SweepRecord("x", trace)
         {
-            Figures = [new NamedFigure("center_hz", "Centre", 137.5e6, "Hz", "and a reason")],
+            Figures = [new NamedFigure(FigureKeys.CentreFrequency, Quantity.Of(137.5e6, QuantityUnit.Hertz), "and a reason")],
         }));
         Assert.Throws<ArgumentException>(() => _store.AddSweep(runId, new SweepRecord("x", trace)
         {
-            Figures = [new NamedFigure("center_hz", "Centre", null, "Hz", null)],
+            Figures = [new NamedFigure(FigureKeys.CentreFrequency, null, null)],
         }));
+        var q = FigureKey.Unlisted("q", "Q", QuantityUnit.None);
         Assert.Throws<ArgumentException>(() => _store.AddSweep(runId, new SweepRecord("x", trace)
         {
-            Figures = [new NamedFigure("q", "Q", 45, "", null), new NamedFigure("q", "Q", 46, "", null)],
+            Figures = [NamedFigure.Of(q, 45), NamedFigure.Of(q, 46)],
         }));
-        Assert.Throws<ArgumentException>(() => _store.AddSweep(runId, new SweepRecord("x", trace)
+        Assert.ThrowsAny<ArgumentException>(() => _store.AddSweep(runId, new SweepRecord("x", trace)
         {
-            Figures = [new NamedFigure("q", "Q", double.PositiveInfinity, "", null)],
+            Figures = [NamedFigure.Of(q, double.PositiveInfinity)],
         }));
         Assert.Throws<ArgumentException>(() => _store.AddSweep(runId, new SweepRecord("x", trace) { SettingsJson = "{span: 3 MHz}" }));
         Assert.Throws<ArgumentException>(() => _store.AddSweep(runId, new SweepRecord("x", trace) { Flags = (SweepFlags)64 }));

@@ -102,12 +102,12 @@ public sealed class ResultStoreViewTests : IDisposable
 
         Assert.Equal(2 * figures.Count, rows.Count);
         var centre = rows.Single(r => (long)r[0]! == 2 && (string)r[3]! == "center_hz");
-        var expected = figures.Single(f => f.Key == "center_hz");
-        Assert.Equal(new object?[] { 2L, "again", "PSF-24-0001", "center_hz", expected.Value, "Hz", null }, centre);
+        var expected = figures.Single(f => f.Key == FigureKeys.CentreFrequency);
+        Assert.Equal(new object?[] { 2L, "again", "PSF-24-0001", "center_hz", expected.Value!.Value.Value, "Hz", null }, centre);
 
         // The resonator is centred on 137.5 MHz (its -3 dB edges are geometrically symmetric about f0,
         // so their arithmetic mean sits a little above it). Pozar, Microwave Engineering, ch. 6.
-        Assert.Equal(137.5e6, expected.Value!.Value, 137.5e6 * 1e-3);
+        Assert.Equal(137.5e6, expected.Value!.Value.Value, 137.5e6 * 1e-3);
     }
 
     [Fact]
@@ -118,8 +118,8 @@ public sealed class ResultStoreViewTests : IDisposable
         {
             Figures =
             [
-                new NamedFigure("center_hz", "Centre", 137.52e6, "Hz", null),
-                new NamedFigure("shape_factor_60_3", "Shape factor", null, "", "never 60 dB down"),
+                NamedFigure.Of(FigureKeys.CentreFrequency, 137.52e6),
+                NamedFigure.Unavailable(FigureKeys.ShapeFactor60To3, "never 60 dB down"),
             ],
             Flags = SweepFlags.Overloaded,
         });

@@ -1,5 +1,6 @@
 using System.Globalization;
 using BenchRunner.Cli.Output;
+using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Text;
 using BenchRunner.Execution.Batch;
 using BenchRunner.Reports.Formatting;
@@ -84,12 +85,12 @@ public sealed class BatchTextView(TextWriter writer, bool colour)
             {
                 f.Limit.CheckName,
                 f.Values.Count.ToString(CultureInfo.InvariantCulture),
-                f.Statistics is { } s ? ReportFormat.Value(s.Mean, f.Limit.Unit) : "-",
-                f.Statistics is { } d ? ReportFormat.Spread(d.StandardDeviation, f.Limit.Unit) : "-",
-                f.Statistics is { } lo ? ReportFormat.Value(lo.Minimum, f.Limit.Unit) : "-",
-                f.Statistics is { } hi ? ReportFormat.Value(hi.Maximum, f.Limit.Unit) : "-",
-                f.Limit.Min is { } lsl ? ReportFormat.Value(lsl, f.Limit.Unit) : "-",
-                f.Limit.Max is { } usl ? ReportFormat.Value(usl, f.Limit.Unit) : "-",
+                f.Statistics is { } s ? QuantityFormat.Format(s.Mean, f.Limit.Unit) : "-",
+                f.Statistics is { } d ? QuantityFormat.Format(d.StandardDeviation, f.Limit.Unit) : "-",
+                f.Statistics is { } lo ? QuantityFormat.Format(lo.Minimum, f.Limit.Unit) : "-",
+                f.Statistics is { } hi ? QuantityFormat.Format(hi.Maximum, f.Limit.Unit) : "-",
+                f.Limit.Min is { } lsl ? QuantityFormat.Format(lsl, f.Limit.Unit) : "-",
+                f.Limit.Max is { } usl ? QuantityFormat.Format(usl, f.Limit.Unit) : "-",
                 f.Capability.IsAvailable ? f.Capability.Value.Cpk.ToString("0.00", CultureInfo.InvariantCulture) : "n/a",
             }).ToList();
             string[] header = ["figure", "n", "mean", "std dev", "min", "max", "LSL", "USL", "Cpk"];

@@ -61,14 +61,14 @@ public static class CheckJsonView
             json.WriteStartObject("figures");
             foreach (var figure in outcome.Figures)
             {
-                WriteNullable(json, figure.Key, figure.Value);
+                WriteNullable(json, figure.Key.Word, figure.Value?.Value);
             }
 
             json.WriteEndObject();
             json.WriteStartObject("figure_notes");
             foreach (var figure in outcome.Figures.Where(f => f.Value is null && f.Reason is not null))
             {
-                json.WriteString(figure.Key, figure.Reason);
+                json.WriteString(figure.Key.Word, figure.Reason);
             }
 
             json.WriteEndObject();

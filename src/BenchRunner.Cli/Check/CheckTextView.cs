@@ -1,5 +1,6 @@
 using BenchRunner.Cli.Output;
 using BenchRunner.Core.Masks;
+using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Text;
 
 namespace BenchRunner.Cli.Check;
@@ -12,7 +13,7 @@ public static class CheckTextView
     {
         var trace = outcome.Trace;
         var eval = outcome.Evaluation;
-        writer.WriteLine($"Trace  {outcome.TracePath}: {trace.Quantity}, {Counted.Of(trace.Count, "point")}, {Display.Frequency(trace.Axis.Start)} to {Display.Frequency(trace.Axis.Stop)}");
+        writer.WriteLine($"Trace  {outcome.TracePath}: {trace.Quantity}, {Counted.Of(trace.Count, "point")}, {Hertz(trace.Axis.Start)} to {Hertz(trace.Axis.Stop)}");
         writer.WriteLine($"Mask   {outcome.MaskPath}: \"{outcome.Mask.Name}\", {eval.PointsChecked} of {Counted.Of(trace.Count, "point")} under a limit");
         writer.WriteLine();
 
@@ -22,7 +23,7 @@ public static class CheckTextView
         writer.WriteLine($"  Verdict        {verdict}");
         if (eval.WorstMarginDb is { } worst && eval.WorstMarginAt is { } at)
         {
-            writer.WriteLine($"  Worst margin   {Display.Margin(worst)} at {Display.Frequency(at)}{SideText(eval.WorstSide)}");
+            writer.WriteLine($"  Worst margin   {QuantityFormat.Signed(worst, QuantityUnit.Decibel)} at {Hertz(at)}{SideText(eval.WorstSide)}");
         }
 
         if (eval.FailingSpans.Count == 0)
@@ -35,9 +36,9 @@ public static class CheckTextView
             foreach (var span in eval.FailingSpans)
             {
                 var range = span.Start == span.Stop
-                    ? $"at {Display.Frequency(span.Start)}"
-                    : $"{Display.Frequency(span.Start)} to {Display.Frequency(span.Stop)}";
-                writer.WriteLine($"    {range}, {Side(span.Side)} limit, worst {Display.Margin(span.WorstMarginDb)}");
+                    ? $"at {Hertz(span.Start)}"
+                    : $"{Hertz(span.Start)} to {Hertz(span.Stop)}";
+                writer.WriteLine($"    {range}, {Side(span.Side)} limit, worst {QuantityFormat.Signed(span.WorstMarginDb, QuantityUnit.Decibel)}");
             }
         }
 
@@ -47,11 +48,13 @@ public static class CheckTextView
         foreach (var figure in outcome.Figures)
         {
             var value = figure.Value is { } v
-                ? Display.Value(v, figure.Unit)
+                ? QuantityFormat.Format(v)
                 : $"not available: {figure.Reason}";
             writer.WriteLine($"    {figure.Label.PadRight(width)}  {value}");
         }
     }
+
+    private static string Hertz(Frequency frequency) => QuantityFormat.Format(frequency.Hertz, QuantityUnit.Hertz);
 
     private static string SideText(LimitSide? side) => side is { } s ? $" ({Side(s)} limit)" : "";
 

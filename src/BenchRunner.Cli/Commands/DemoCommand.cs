@@ -5,6 +5,8 @@ using BenchRunner.Cli.Demo;
 using BenchRunner.Cli.Output;
 using BenchRunner.Cli.Results;
 using BenchRunner.Cli.Run;
+using BenchRunner.Core.Figures;
+using BenchRunner.Core.Quantities;
 using BenchRunner.Execution.Running;
 using BenchRunner.Execution.Validation;
 using BenchRunner.Instruments.Connections;
@@ -100,7 +102,7 @@ public static class DemoCommand
     {
         writer.WriteLine();
         writer.WriteLine("Summary");
-        writer.WriteLine($"  {"board",-12}  {"verdict",-7}  {"centre",-13}  {"-3 dB width",-11}  {"loss",-8}  worst mask margin");
+        writer.WriteLine($"  {"board",-12}  {"verdict",-7}  {"centre",-13}  {"-3 dB width",-13}  {"loss",-8}  worst mask margin");
         foreach (var b in boards)
         {
             var verdict = b.Outcome.Status switch
@@ -109,7 +111,7 @@ public static class DemoCommand
                 RunStatus.Failed => Display.Colour("FAIL   ", ConsoleColour.Red, colour),
                 var s => s.ToString().ToUpperInvariant().PadRight(7),
             };
-            writer.WriteLine($"  {b.Serial,-12}  {verdict}  {Cell(b.Figure("center_hz"), "Hz"),-13}  {Cell(b.Figure("bandwidth_3db_hz"), "Hz"),-11}  {Cell(b.Figure("insertion_loss_db"), "dB"),-8}  {(b.MaskMargin is { } m ? Display.Margin(m) : "-")}");
+            writer.WriteLine($"  {b.Serial,-12}  {verdict}  {Cell(b.Figure(FigureKeys.CentreFrequency)),-13}  {Cell(b.Figure(FigureKeys.Bandwidth3Db)),-13}  {Cell(b.Figure(FigureKeys.InsertionLoss)),-8}  {(b.MaskMargin is { } m ? QuantityFormat.Signed(m, QuantityUnit.Decibel) : "-")}");
             foreach (var failed in b.Outcome.Checks.Where(c => !c.Passed))
             {
                 writer.WriteLine($"      failed: {failed.Name}: {failed.Detail}");
@@ -130,7 +132,7 @@ public static class DemoCommand
         writer.WriteLine($"  {detail}   shows the last board in detail");
     }
 
-    private static string Cell(double? value, string unit) => value is { } v ? Display.Value(v, unit) : "-";
+    private static string Cell(Quantity? value) => value is { } v ? QuantityFormat.Format(v) : "-";
 
     private static void WriteJson(IReadOnlyList<DemoBoardResult> boards, string db, TextWriter writer)
     {
@@ -140,7 +142,7 @@ public static class DemoCommand
             var figures = new JsonObject();
             foreach (var f in b.Figures)
             {
-                figures[f.Key] = f.Value;
+                figures[f.Key.Word] = f.Value?.Value;
             }
 
             array.Add(new JsonObject

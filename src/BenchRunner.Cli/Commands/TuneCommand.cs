@@ -236,7 +236,7 @@ public static class TuneCommand
                 ["failed_checks"] = new JsonArray(last.FailedChecks.Select(c => (JsonNode?)c).ToArray()),
                 ["figures"] = new JsonArray(last.Figures.Select(f => (JsonNode?)new JsonObject
                 {
-                    ["key"] = f.Key, ["trace"] = f.Trace, ["value"] = f.Value, ["unit"] = f.Unit, ["change"] = f.Change,
+                    ["key"] = f.Key.Word, ["trace"] = f.Trace, ["value"] = f.Value, ["unit"] = f.Unit.Symbol, ["change"] = f.Change,
                     ["min"] = f.Limit?.Min, ["max"] = f.Limit?.Max, ["target"] = f.Limit?.Target, ["inside"] = f.Inside,
                 }).ToArray()),
             },

@@ -1,4 +1,5 @@
 using BenchRunner.Core.Figures;
+using BenchRunner.Core.Quantities;
 using BenchRunner.Execution.Running;
 
 namespace BenchRunner.Cli.Demo;
@@ -7,7 +8,7 @@ namespace BenchRunner.Cli.Demo;
 public sealed record DemoBoardResult(string Serial, RunOutcome Outcome, IReadOnlyList<NamedFigure> Figures)
 {
     /// <summary>The value of figure <paramref name="key"/>, or null.</summary>
-    public double? Figure(string key) => Figures.FirstOrDefault(f => f.Key == key)?.Value;
+    public Quantity? Figure(FigureKey key) => Figures.FirstOrDefault(f => f.Key == key)?.Value;
 
     /// <summary>The mask check's margin in dB, or null.</summary>
     public double? MaskMargin => Outcome.Checks.FirstOrDefault(c => c.Name.StartsWith("mask ", StringComparison.Ordinal))?.Margin;

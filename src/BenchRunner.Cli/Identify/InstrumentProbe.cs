@@ -1,5 +1,6 @@
 using BenchRunner.Cli.Output;
 using BenchRunner.Core.Diagnostics;
+using BenchRunner.Core.Quantities;
 using BenchRunner.Instruments.Adapters;
 using BenchRunner.Instruments.Capabilities;
 using BenchRunner.Instruments.Connections;
@@ -40,10 +41,10 @@ public static class InstrumentProbe
     public static string DescribeLimits(InstrumentLimits limits)
     {
         var parts = new List<string>();
-        if (limits.FrequencyRange is { } range) parts.Add($"{Display.Frequency(range.Start)} to {Display.Frequency(range.Stop)}");
-        if (limits.MaxInputLevel is { } input) parts.Add($"input at most {Display.Level(input.Dbm)}");
-        if (limits.MaxOutputLevel is { } output) parts.Add($"output at most {Display.Level(output.Dbm)}");
-        if (limits.MinOutputLevel is { } min) parts.Add($"output at least {Display.Level(min.Dbm)}");
+        if (limits.FrequencyRange is { } range) parts.Add($"{QuantityFormat.Format(range.Start.Hertz, QuantityUnit.Hertz)} to {QuantityFormat.Format(range.Stop.Hertz, QuantityUnit.Hertz)}");
+        if (limits.MaxInputLevel is { } input) parts.Add($"input at most {QuantityFormat.Signed(input.Dbm, QuantityUnit.DecibelMilliwatt)}");
+        if (limits.MaxOutputLevel is { } output) parts.Add($"output at most {QuantityFormat.Signed(output.Dbm, QuantityUnit.DecibelMilliwatt)}");
+        if (limits.MinOutputLevel is { } min) parts.Add($"output at least {QuantityFormat.Signed(min.Dbm, QuantityUnit.DecibelMilliwatt)}");
         return parts.Count == 0 ? "none declared" : string.Join("; ", parts);
     }
 }

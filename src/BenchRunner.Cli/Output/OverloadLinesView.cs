@@ -74,7 +74,7 @@ public static class OverloadLinesView
             var change = OverloadWords.Change(r.ChangeDb);
             var dbc = r.Dbc is { } d ? d.ToString("0.0", Invariant) : "-";
             var shown = PlanRunner.Shown(Frequency.FromHertz(r.Hertz));
-            writer.WriteLine($"{indent}{shown,-14}  {Display.Level(Math.Round(r.LevelDbm, 1)),11}  {change,9}  {verdict}  {r.Label,-16}  {dbc,7}{(r.Relied ? "  relied on" : "")}");
+            writer.WriteLine($"{indent}{shown,-14}  {QuantityFormat.Signed(Math.Round(r.LevelDbm, 1), QuantityUnit.DecibelMilliwatt),11}  {change,9}  {verdict}  {r.Label,-16}  {dbc,7}{(r.Relied ? "  relied on" : "")}");
         }
     }
 

@@ -41,7 +41,7 @@ public static class ResultsJsonView
             var values = new JsonObject();
             foreach (var f in bySweep[s.Id])
             {
-                values[f.Figure.Key] = f.Figure.Value;
+                values[f.Figure.Key.Word] = f.Figure.Value?.Value;
             }
 
             return (JsonNode?)new JsonObject

@@ -1,5 +1,7 @@
 using System.Globalization;
 using BenchRunner.Cli.Output;
+using BenchRunner.Core.Figures;
+using BenchRunner.Core.Quantities;
 using BenchRunner.Storage;
 using BenchRunner.Core.Runs;
 
@@ -9,7 +11,8 @@ namespace BenchRunner.Cli.Results;
 public static class ResultsTextView
 {
     /// <summary>The figures shown per sweep in a run's detail, in this order, when present.</summary>
-    private static readonly string[] SweepFigures = ["center_hz", "bandwidth_3db_hz", "insertion_loss_db", "loaded_q", "peak_dbm", "noise_floor_dbm"];
+    private static readonly FigureKey[] SweepFigures =
+        [FigureKeys.CentreFrequency, FigureKeys.Bandwidth3Db, FigureKeys.InsertionLoss, FigureKeys.LoadedQ, FigureKeys.PeakPower, FigureKeys.NoiseFloor];
 
     /// <summary>One line per run, newest first.</summary>
     public static void WriteList(IReadOnlyList<StoredRun> runs, string database, TextWriter writer)
@@ -57,7 +60,7 @@ public static class ResultsTextView
             writer.WriteLine(tuning ? "  Checks of the last sweep" : "  Checks");
             foreach (var c in listed)
             {
-                var margin = c.Record.Margin is { } m ? $", margin {Display.Value(m, c.Record.MarginUnit ?? "")}" : "";
+                var margin = c.Record.Margin is { } m ? $", margin {QuantityFormat.Format(m, c.Record.MarginUnit)}" : "";
                 var flagged = c.Record.Flags.HasFlag(CheckFlags.TraceOverloaded) ? "  [FLAGGED: trace measured while overloaded]" : "";
                 writer.WriteLine($"    {(c.Record.Passed ? "pass" : "FAIL")}  {c.Record.Name}{(c.Record.LimitText is null ? "" : $" ({c.Record.LimitText})")}{margin}{flagged}");
                 if (c.Record.Message is not null)
@@ -81,11 +84,11 @@ public static class ResultsTextView
             writer.WriteLine($"  Sweeps ({sweeps.Count})");
             // The trace column is as wide as the longest trace name (at least "trace"), so names such as spectrum-raised stay aligned.
             int traceWidth = sweeps.Select(TraceName).Append("trace").Max(n => n.Length);
-            writer.WriteLine("    " + string.Join("  ", new[] { $"{"#",4}", $"{"acquired",-12}", "trace".PadRight(traceWidth) }.Concat(shown.Select(k => $"{k,16}"))));
+            writer.WriteLine("    " + string.Join("  ", new[] { $"{"#",4}", $"{"acquired",-12}", "trace".PadRight(traceWidth) }.Concat(shown.Select(k => $"{k.Word,16}"))));
             foreach (var s in sweeps)
             {
                 var values = bySweep[s.Id].ToDictionary(f => f.Figure.Key, f => f.Figure);
-                var cells = shown.Select(key => values.TryGetValue(key, out var f) && f.Value is { } v ? Display.Value(v, f.Unit) : "-");
+                var cells = shown.Select(key => values.TryGetValue(key, out var f) && f.Value is { } v ? QuantityFormat.Format(v) : "-");
                 var acquired = s.Record.AcquiredUtc is { } t ? t.UtcDateTime.ToString("HH:mm:ss.fff", CultureInfo.InvariantCulture) : "-";
                 writer.WriteLine("    " + string.Join("  ", new[] { $"{s.Sequence,4}", $"{acquired,-12}", TraceName(s).PadRight(traceWidth) }.Concat(cells.Select(c => $"{c,16}"))));
             }

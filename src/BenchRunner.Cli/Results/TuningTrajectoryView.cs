@@ -1,5 +1,7 @@
 using System.Globalization;
 using BenchRunner.Cli.Output;
+using BenchRunner.Core.Figures;
+using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Text;
 using BenchRunner.Storage;
 using BenchRunner.Core.Runs;
@@ -32,15 +34,15 @@ public static class TuningTrajectoryView
         var first = sweeps[0].Record.AcquiredUtc ?? DateTimeOffset.MinValue;
         writer.WriteLine();
         writer.WriteLine($"  Trajectory ({Counted.Of(sweeps.Count, "sweep")} of the tuning session)");
-        writer.WriteLine($"    {"#",4}  {"time",8}  {"centre",-13}  {"change",-12}  {"loss",-8}  {"-3 dB width",-11}  {"mask margin",-11}  {"checks",-8}  streak");
+        writer.WriteLine($"    {"#",4}  {"time",8}  {"centre",-13}  {"change",-12}  {"loss",-8}  {"-3 dB width",-13}  {"mask margin",-11}  {"checks",-8}  streak");
         double? previousCentre = null;
         int streak = 0;
         foreach (var s in sweeps)
         {
             var values = bySweep[s.Id].ToDictionary(f => f.Figure.Key, f => f.Figure.Value);
-            double? Get(string key) => values.TryGetValue(key, out var v) ? v : null;
-            var centre = Get("center_hz");
-            var change = centre is { } c && previousCentre is { } p ? Signed(c - p) : "";
+            Quantity? Get(FigureKey key) => values.TryGetValue(key, out var v) ? v : null;
+            var centre = Get(FigureKeys.CentreFrequency)?.Value;
+            var change = centre is { } c && previousCentre is { } p ? Signed(c - p, c) : "";
             previousCentre = centre ?? previousCentre;
             var own = checksBySweep[s.Id].ToList();
             var mask = own.FirstOrDefault(k => k.Record.Kind == CheckKind.Mask)?.Record.Margin;
@@ -48,11 +50,17 @@ public static class TuningTrajectoryView
             streak = own.Count > 0 && outside == 0 ? streak + 1 : 0;
             var elapsed = s.Record.AcquiredUtc is { } t ? $"+{(t - first).TotalSeconds.ToString("0.0", CultureInfo.InvariantCulture)} s" : "-";
             var verdict = own.Count == 0 ? "-" : outside == 0 ? "in" : $"{outside} out";
-            writer.WriteLine($"    {s.Sequence,4}  {elapsed,8}  {Cell(centre, "Hz"),-13}  {change,-12}  {Cell(Get("insertion_loss_db"), "dB"),-8}  {Cell(Get("bandwidth_3db_hz"), "Hz"),-11}  {(mask is { } m ? Display.Margin(m) : "-"),-11}  {verdict,-8}  {streak}");
+            writer.WriteLine($"    {s.Sequence,4}  {elapsed,8}  {Cell(Get(FigureKeys.CentreFrequency)),-13}  {change,-12}  {Cell(Get(FigureKeys.InsertionLoss)),-8}  {Cell(Get(FigureKeys.Bandwidth3Db)),-13}  {(mask is { } m ? QuantityFormat.Signed(m, QuantityUnit.Decibel) : "-"),-11}  {verdict,-8}  {streak}");
         }
     }
 
-    private static string Cell(double? value, string unit) => value is { } v ? Display.Value(v, unit) : "-";
+    private static string Cell(Quantity? value) => value is { } v ? QuantityFormat.Format(v) : "-";
 
-    private static string Signed(double hertz) => (hertz >= 0 ? "+" : "-") + Display.Hertz(Math.Abs(hertz));
+    // The change at the resolution the centre itself is shown with (100 Hz at 137 MHz).
+    private static string Signed(double hertz, double centre)
+    {
+        var step = QuantityFormat.Resolution(centre, QuantityUnit.Hertz);
+        var shown = step > 0 ? Math.Round(hertz / step) * step : hertz;
+        return (shown >= 0 ? "+" : "-") + QuantityFormat.Format(Math.Abs(shown), QuantityUnit.Hertz);
+    }
 }

@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text;
 using BenchRunner.Cli.Output;
 using BenchRunner.Core.Masks;
+using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;
 
 namespace BenchRunner.Cli.Tune;
@@ -104,7 +105,7 @@ public static class TracePlot
         }
 
         lines.Add(new string(' ', 9) + "+" + new string('-', width));
-        string left = Display.Frequency(trace.Axis.Start), right = Display.Frequency(trace.Axis.Stop);
+        string left = QuantityFormat.Format(trace.Axis.Start.Hertz, QuantityUnit.Hertz), right = QuantityFormat.Format(trace.Axis.Stop.Hertz, QuantityUnit.Hertz);
         lines.Add(new string(' ', 10) + left + right.PadLeft(Math.Max(1, width - left.Length)));
         return lines;
     }

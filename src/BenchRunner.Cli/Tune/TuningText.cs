@@ -1,5 +1,7 @@
 using System.Globalization;
 using BenchRunner.Cli.Output;
+using BenchRunner.Core.Figures;
+using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Text;
 using BenchRunner.Execution.Plans;
 using BenchRunner.Execution.Tuning;
@@ -10,9 +12,7 @@ namespace BenchRunner.Cli.Tune;
 public static class TuningText
 {
     /// <summary>The figure's value in its unit, or <c>-</c> when it has none.</summary>
-    public static string Value(TuningFigure figure) => figure.Value is not { } v ? "-"
-        : figure.Key == TuningTargets.MaskMarginKey ? Display.Margin(v)
-        : Display.Value(v, figure.Unit);
+    public static string Value(TuningFigure figure) => figure.Value is not { } v ? "-" : Shown(figure, v);
 
     /// <summary>The change since the last sweep with its sign, e.g. <c>+31.2 kHz</c>, <c>-0.02 dB</c>; empty when unknown.</summary>
     public static string Change(TuningFigure figure)
@@ -22,19 +22,21 @@ public static class TuningText
             return "";
         }
 
-        var magnitude = Math.Abs(d);
-        var text = figure.Unit switch
+        // Shown at the resolution of the value itself: finer digits of a change are not in the value's text.
+        if (figure.Value is { } value && QuantityFormat.Resolution(value, figure.Unit) is var step and > 0)
         {
-            "Hz" => Display.Hertz(magnitude),
-            "dB" or "dBm" => $"{magnitude.ToString("0.00", CultureInfo.InvariantCulture)} dB",
-            _ => Display.Number(magnitude),
-        };
+            d = Math.Round(d / step) * step;
+        }
+
+        // A change of a level in dBm is a ratio, in dB.
+        var unit = figure.Unit == QuantityUnit.DecibelMilliwatt ? QuantityUnit.Decibel : figure.Unit;
+        var text = QuantityFormat.Format(Math.Abs(d), unit);
         // A change too small to show at this resolution has no direction.
         bool shown = text.Any(c => c is >= '1' and <= '9');
         return (!shown ? "±" : d > 0 ? "+" : "-") + text;
     }
 
-    /// <summary>The target in words, e.g. <c>137.5 MHz ± 0.3 MHz</c>, <c>at most 4.00 dB</c>; <c>-</c> when the plan sets none.</summary>
+    /// <summary>The target in words, e.g. <c>137.5 MHz ± 300 kHz</c>, <c>at most 4 dB</c>; <c>-</c> when the plan sets none.</summary>
     public static string Target(TuningFigure figure)
     {
         if (figure.Limit is not { } limit)
@@ -42,16 +44,21 @@ public static class TuningText
             return "-";
         }
 
-        string F(double v) => figure.Key == TuningTargets.MaskMarginKey ? Display.Margin(v) : Display.Value(v, limit.Unit);
+        string F(double v) => Shown(figure, v);
         return (limit.Min, limit.Max, limit.Target) switch
         {
-            ({ } lo, { } hi, { } t) => $"{F(t)} ± {Display.Value((hi - lo) / 2, limit.Unit)}",
+            ({ } lo, { } hi, { } t) => $"{F(t)} ± {QuantityFormat.Format((hi - lo) / 2, limit.Unit)}",
             ({ } lo, { } hi, null) => $"{F(lo)} to {F(hi)}",
             ({ } lo, null, _) => $"at least {F(lo)}",
             (null, { } hi, _) => $"at most {F(hi)}",
             _ => "-",
         };
     }
+
+    // A margin is shown with its sign (+0.6 dB), every other value as it is.
+    private static string Shown(TuningFigure figure, double value) => figure.Key == FigureKeys.MaskMargin
+        ? QuantityFormat.Signed(value, figure.Unit)
+        : QuantityFormat.Format(value, figure.Unit);
 
     /// <summary><c>in</c>, <c>OUT</c>, or empty when the figure has no target; coloured when asked.</summary>
     public static string Inside(TuningFigure figure, bool colour) => figure.Inside switch

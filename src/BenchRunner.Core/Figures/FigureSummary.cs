@@ -3,8 +3,8 @@ using BenchRunner.Core.Traces;
 namespace BenchRunner.Core.Figures;
 
 /// <summary>
-/// The standard set of figures for a trace, with stable keys, for printing, JSON output and
-/// storage. A figure that cannot be computed has a null value and the reason.
+/// The standard set of figures for a trace, keyed by <see cref="FigureKeys"/>, for printing, JSON
+/// output and storage. A figure that cannot be computed has a null value and the reason.
 /// </summary>
 public static class FigureSummary
 {
@@ -14,30 +14,32 @@ public static class FigureSummary
     /// <c>upper_3db_hz</c>, <c>bandwidth_1db_hz</c>, <c>shape_factor_60_3</c>, and for an S21
     /// trace <c>unloaded_q</c>. Bandwidths, centre and loaded Q use exactly 3 dB (and 1 dB) below
     /// the peak; the unloaded Q uses the half-power bandwidth, as its formula requires
-    /// (see <see cref="TraceFigures.UnloadedQ(Trace)"/>). <c>peak_db</c> is in the trace's unit.
+    /// (see <see cref="TraceFigures.UnloadedQ(Trace)"/>). The keys are those of <see cref="FigureKeys"/>;
+    /// a trace in dBm reports its peak level as <c>peak_dbm</c> instead of <c>peak_db</c>.
     /// </summary>
     public static IReadOnlyList<NamedFigure> ForFilter(Trace trace)
     {
         ArgumentNullException.ThrowIfNull(trace);
         var peak = TraceFigures.Peak(trace);
         var bw3 = TraceFigures.Bandwidth(trace, 3);
+        var peakLevel = trace.Unit == TraceUnit.Decibel ? FigureKeys.PeakLevel : FigureKeys.PeakPower;
         var figures = new List<NamedFigure>
         {
-            Named("peak_hz", "Peak frequency", peak.Select(p => p.Frequency.Hertz), "Hz"),
-            Named("peak_db", "Peak level", peak.Select(p => p.LevelDb), trace.UnitSymbol),
-            Named("bandwidth_3db_hz", "-3 dB bandwidth", bw3.Select(b => b.Width.Hertz), "Hz"),
-            Named("center_hz", "Centre frequency (-3 dB)", bw3.Select(b => b.Centre.Hertz), "Hz"),
-            Named("loaded_q", "Loaded Q (-3 dB)", bw3.Select(b => b.LoadedQ), ""),
-            Named("insertion_loss_db", "Insertion loss", TraceFigures.InsertionLoss(trace), "dB"),
-            Named("lower_3db_hz", "Lower -3 dB edge", bw3.Select(b => b.Lower.Hertz), "Hz"),
-            Named("upper_3db_hz", "Upper -3 dB edge", bw3.Select(b => b.Upper.Hertz), "Hz"),
-            Named("bandwidth_1db_hz", "-1 dB bandwidth", TraceFigures.Bandwidth(trace, 1).Select(b => b.Width.Hertz), "Hz"),
-            Named("shape_factor_60_3", "Shape factor 60/3 dB", TraceFigures.ShapeFactor(trace, 60, 3), ""),
+            NamedFigure.From(FigureKeys.PeakFrequency, peak.Select(p => p.Frequency.Hertz)),
+            NamedFigure.From(peakLevel, peak.Select(p => p.LevelDb)),
+            NamedFigure.From(FigureKeys.Bandwidth3Db, bw3.Select(b => b.Width.Hertz)),
+            NamedFigure.From(FigureKeys.CentreFrequency, bw3.Select(b => b.Centre.Hertz)),
+            NamedFigure.From(FigureKeys.LoadedQ, bw3.Select(b => b.LoadedQ)),
+            NamedFigure.From(FigureKeys.InsertionLoss, TraceFigures.InsertionLoss(trace)),
+            NamedFigure.From(FigureKeys.Lower3Db, bw3.Select(b => b.Lower.Hertz)),
+            NamedFigure.From(FigureKeys.Upper3Db, bw3.Select(b => b.Upper.Hertz)),
+            NamedFigure.From(FigureKeys.Bandwidth1Db, TraceFigures.Bandwidth(trace, 1).Select(b => b.Width.Hertz)),
+            NamedFigure.From(FigureKeys.ShapeFactor60To3, TraceFigures.ShapeFactor(trace, 60, 3)),
         };
 
         if (trace.Quantity == TraceQuantity.S21)
         {
-            figures.Add(Named("unloaded_q", "Unloaded Q", TraceFigures.UnloadedQ(trace), ""));
+            figures.Add(NamedFigure.From(FigureKeys.UnloadedQ, TraceFigures.UnloadedQ(trace)));
         }
 
         return figures;
@@ -55,17 +57,12 @@ public static class FigureSummary
         var obw = PowerFigures.OccupiedBandwidth(trace, 0.99);
         return
         [
-            Named("peak_hz", "Peak frequency", peak.Select(p => p.Frequency.Hertz), "Hz"),
-            Named("peak_dbm", "Peak level", peak.Select(p => p.LevelDb), "dBm"),
-            Named("noise_floor_dbm", "Noise floor (median)", PowerFigures.NoiseFloor(trace).Select(l => l.Dbm), "dBm"),
-            Named("occupied_bandwidth_hz", "Occupied bandwidth (99 %)", obw.Select(o => o.Width.Hertz), "Hz"),
-            Named("occupied_lower_hz", "Occupied band lower edge", obw.Select(o => o.Lower.Hertz), "Hz"),
-            Named("occupied_upper_hz", "Occupied band upper edge", obw.Select(o => o.Upper.Hertz), "Hz"),
+            NamedFigure.From(FigureKeys.PeakFrequency, peak.Select(p => p.Frequency.Hertz)),
+            NamedFigure.From(FigureKeys.PeakPower, peak.Select(p => p.LevelDb)),
+            NamedFigure.From(FigureKeys.NoiseFloor, PowerFigures.NoiseFloor(trace).Select(l => l.Dbm)),
+            NamedFigure.From(FigureKeys.OccupiedBandwidth, obw.Select(o => o.Width.Hertz)),
+            NamedFigure.From(FigureKeys.OccupiedLower, obw.Select(o => o.Lower.Hertz)),
+            NamedFigure.From(FigureKeys.OccupiedUpper, obw.Select(o => o.Upper.Hertz)),
         ];
     }
-
-    private static NamedFigure Named(string key, string label, FigureResult<double> result, string unit) =>
-        result.IsAvailable
-            ? new NamedFigure(key, label, result.Value, unit, null)
-            : new NamedFigure(key, label, null, unit, result.Reason);
 }

@@ -1,4 +1,3 @@
-using System.Globalization;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;
 
@@ -55,7 +54,7 @@ public static class TraceFigures
         var (start, end) = SampleMath.HighestRun(levels);
         var peak = RefinedPeak(trace, start, end);
         double threshold = peak.LevelDb - belowPeakDb;
-        string depth = $"{Number(belowPeakDb)} dB below the peak ({Number(peak.LevelDb)} {trace.UnitSymbol} at {peak.Frequency})";
+        string depth = $"{QuantityFormat.Format(belowPeakDb, QuantityUnit.Decibel)} below the peak ({QuantityFormat.Format(peak.LevelDb, trace.UnitSymbol)} at {peak.Frequency})";
 
         double? lower = null;
         for (int j = start; j > 0; j--)
@@ -170,7 +169,7 @@ public static class TraceFigures
         if (magnitude >= 1)
         {
             return FigureResult<double>.Unavailable(
-                $"|S21| at resonance is {Number(transmissionAtResonanceDb)} dB, not below 0 dB; Qu = QL/(1 - |S21|) needs a passive resonator");
+                $"|S21| at resonance is {QuantityFormat.Format(transmissionAtResonanceDb, QuantityUnit.Decibel)}, not below 0 dB; Qu = QL/(1 - |S21|) needs a passive resonator");
         }
 
         return FigureResult<double>.Available(loadedQ / (1 - magnitude));
@@ -278,8 +277,6 @@ public static class TraceFigures
         var (hz, level, index) = SampleMath.RefineMaximum(trace.Axis.Hertz.AsSpan(), trace.LevelsDb.AsSpan(), start, end);
         return new PeakPoint(Frequency.FromHertz(hz), level, index);
     }
-
-    internal static string Number(double value) => value.ToString("0.###", CultureInfo.InvariantCulture);
 
     private static FigureResult<List<(double Hz, double Level)>> RangePoints(Trace trace, Frequency from, Frequency to)
     {

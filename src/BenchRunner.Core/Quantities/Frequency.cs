@@ -7,8 +7,8 @@ namespace BenchRunner.Core.Quantities;
 /// </summary>
 public readonly struct Frequency : IEquatable<Frequency>, IComparable<Frequency>
 {
-    private static readonly (double Scale, string Prefix)[] Prefixes =
-        [(1e9, "G"), (1e6, "M"), (1e3, "k"), (1, "")];
+    // Enough digits that parsing the text gives back the value (docs/quantities.md, round trips).
+    private const int ExactDigits = 9;
 
     private Frequency(double hertz) => Hertz = hertz;
 
@@ -87,8 +87,12 @@ public readonly struct Frequency : IEquatable<Frequency>, IComparable<Frequency>
         return ParseResult<Frequency>.Ok(new Frequency(hertz + 0.0));
     }
 
-    /// <summary>Formats with the largest fitting prefix, e.g. <c>137.5 MHz</c>.</summary>
-    public override string ToString() => QuantityText.FormatScaled(Hertz, "Hz", Prefixes);
+    /// <summary>
+    /// Formats with the largest fitting prefix and up to 9 significant digits, so that
+    /// <see cref="Parse"/> reads the text back exactly, e.g. <c>137.5 MHz</c>. Measured figures are
+    /// shown with <see cref="QuantityFormat"/>'s 7 digits instead.
+    /// </summary>
+    public override string ToString() => QuantityFormat.Format(Hertz, QuantityUnit.Hertz, ExactDigits);
 
     /// <inheritdoc/>
     public bool Equals(Frequency other) => Hertz.Equals(other.Hertz);

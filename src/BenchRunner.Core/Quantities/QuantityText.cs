@@ -4,7 +4,7 @@ namespace BenchRunner.Core.Quantities;
 
 /// <summary>
 /// Splits text such as <c>"137.5 MHz"</c>, <c>"21.4MHz"</c>, <c>"-20 dBm"</c> or <c>"1e6"</c>
-/// into a number and a unit word, and formats numbers with SI prefixes.
+/// into a number and a unit word. Values are formatted by <see cref="QuantityFormat"/>.
 /// Numbers use the invariant culture (a point as decimal separator, optional exponent).
 /// </summary>
 internal static class QuantityText
@@ -49,37 +49,6 @@ internal static class QuantityText
 
         var unit = s[i..].Trim();
         return ParseResult<(double, string)>.Ok((number, unit));
-    }
-
-    /// <summary>
-    /// Formats <paramref name="value"/> (in base units) with the largest SI prefix from
-    /// <paramref name="prefixes"/> that keeps the mantissa at or above 1, using up to
-    /// <paramref name="significant"/> significant digits.
-    /// </summary>
-    public static string FormatScaled(double value, string baseUnit, ReadOnlySpan<(double Scale, string Prefix)> prefixes, int significant = 9)
-    {
-        if (value == 0 || !double.IsFinite(value))
-        {
-            // Adding zero turns -0.0 into +0.0, which would otherwise print as "-0".
-            return $"{(value + 0.0).ToString(CultureInfo.InvariantCulture)} {baseUnit}";
-        }
-
-        var magnitude = Math.Abs(value);
-        var chosen = prefixes[^1];
-        foreach (var p in prefixes)
-        {
-            if (magnitude >= p.Scale * 0.9999999995)
-            {
-                chosen = p;
-                break;
-            }
-        }
-
-        var scaled = value / chosen.Scale;
-        // Math.Round accepts at most 15 decimals; more are only asked for below the smallest prefix.
-        var decimals = Math.Clamp(significant - 1 - (int)Math.Floor(Math.Log10(Math.Abs(scaled))), 0, 15);
-        var rounded = RoundForDisplay(scaled, decimals);
-        return $"{rounded.ToString("0.###############", CultureInfo.InvariantCulture)} {chosen.Prefix}{baseUnit}";
     }
 
     /// <summary>

@@ -98,8 +98,8 @@ public readonly struct Resistance : IEquatable<Resistance>, IComparable<Resistan
         return ParseResult<Resistance>.Ok(new Resistance(ohms + 0.0));
     }
 
-    /// <summary>Formats with the largest fitting prefix, e.g. <c>4.7 kOhm</c> or <c>50 Ohm</c>.</summary>
-    public override string ToString() => QuantityText.FormatScaled(Ohms, "Ohm", Prefixes);
+    /// <summary>Formats with the largest fitting prefix, e.g. <c>4.7 kOhm</c> or <c>50 Ohm</c>, up to 9 significant digits (the text reads back exactly).</summary>
+    public override string ToString() => QuantityFormat.Scaled(Ohms, 9, Prefixes, "Ohm");
 
     /// <inheritdoc/>
     public bool Equals(Resistance other) => Ohms.Equals(other.Ohms);

@@ -42,7 +42,7 @@ public sealed class PlanLimits
                     masks.Add(new RecordedMask(step.Name ?? step.Word, mask.Trace, MaskFile.Format(mask.Mask)));
                     break;
                 case FigureCheck check:
-                    figures.AddRange(check.Limits.Select(l => new RecordedFigureLimit(check.Trace, l.Key, l.Unit, l.Min, l.Max, l.Target)));
+                    figures.AddRange(check.Limits.Select(l => new RecordedFigureLimit(check.Trace, l.Key.Word, l.Unit.Symbol, l.Min, l.Max, l.Target)));
                     break;
             }
         }

@@ -1,31 +1,33 @@
+using BenchRunner.Core.Figures;
 using BenchRunner.Core.Traces;
+using static BenchRunner.Core.Figures.FigureKeys;
 
 namespace BenchRunner.Execution.Plans;
 
 /// <summary>
-/// The figures a plan may check, the same keys as <c>FigureSummary.ForFilter</c> and
-/// <c>FigureSummary.ForSpectrum</c> report (a test keeps the two lists in step).
+/// The figures a plan may check and the traces each applies to: the keys <c>FigureSummary.ForFilter</c>
+/// and <c>FigureSummary.ForSpectrum</c> report (a test keeps the two lists in step).
 /// </summary>
 public static class FigureCatalogue
 {
     /// <summary>Every figure.</summary>
     public static readonly IReadOnlyList<FigureDefinition> All =
     [
-        new("peak_hz", "Hz", false), new("peak_db", "dB", false), new("bandwidth_3db_hz", "Hz", false),
-        new("center_hz", "Hz", false), new("loaded_q", "", false), new("insertion_loss_db", "dB", false),
-        new("lower_3db_hz", "Hz", false), new("upper_3db_hz", "Hz", false), new("bandwidth_1db_hz", "Hz", false),
-        new("shape_factor_60_3", "", false), new("unloaded_q", "", false, S21Only: true),
-        new("peak_hz", "Hz", true), new("peak_dbm", "dBm", true), new("noise_floor_dbm", "dBm", true),
-        new("occupied_bandwidth_hz", "Hz", true), new("occupied_lower_hz", "Hz", true), new("occupied_upper_hz", "Hz", true),
+        new(PeakFrequency, false), new(PeakLevel, false), new(Bandwidth3Db, false),
+        new(CentreFrequency, false), new(LoadedQ, false), new(InsertionLoss, false),
+        new(Lower3Db, false), new(Upper3Db, false), new(Bandwidth1Db, false),
+        new(ShapeFactor60To3, false), new(UnloadedQ, false, S21Only: true),
+        new(PeakFrequency, true), new(PeakPower, true), new(NoiseFloor, true),
+        new(OccupiedBandwidth, true), new(OccupiedLower, true), new(OccupiedUpper, true),
     ];
 
     /// <summary>The figures of a trace of <paramref name="quantity"/>.</summary>
     public static IEnumerable<FigureDefinition> For(TraceQuantity quantity) =>
         All.Where(f => f.OfSpectrum == (quantity == TraceQuantity.Power) && (!f.S21Only || quantity == TraceQuantity.S21));
 
-    /// <summary>The figure <paramref name="key"/> of a trace of <paramref name="quantity"/>, or null.</summary>
-    public static FigureDefinition? Find(string key, TraceQuantity quantity) => For(quantity).FirstOrDefault(f => f.Key == key);
+    /// <summary>The figure stored as <paramref name="word"/> of a trace of <paramref name="quantity"/>, or null.</summary>
+    public static FigureDefinition? Find(string word, TraceQuantity quantity) => For(quantity).FirstOrDefault(f => f.Key.Word == word);
 
-    /// <summary>The figure <paramref name="key"/> of any kind of trace, or null when no trace has it.</summary>
-    public static FigureDefinition? FindAny(string key) => All.FirstOrDefault(f => f.Key == key);
+    /// <summary>The figure stored as <paramref name="word"/> of any kind of trace, or null when no trace has it.</summary>
+    public static FigureDefinition? FindAny(string word) => All.FirstOrDefault(f => f.Key.Word == word);
 }

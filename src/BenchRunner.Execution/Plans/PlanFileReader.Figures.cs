@@ -9,7 +9,7 @@ internal sealed partial class PlanFileReader
 {
     private List<FigureLimit>? ReadLimits(StrictMap map, NamedTrace? trace)
     {
-        var value = map.Require(Figures, "give the limits, e.g. \"insertion_loss_db: { max: 4 dB }\"");
+        var value = map.Require(Figures, $"give the limits, e.g. \"{Core.Figures.FigureKeys.InsertionLoss.Word}: {{ max: 4 dB }}\"");
         if (value is null)
         {
             return null;
@@ -18,7 +18,7 @@ internal sealed partial class PlanFileReader
         if (value is not YamlMap figures || figures.Entries.Count == 0)
         {
             _problems.Add(map.ValueLocation(Figures),
-                $"expected \"{Figures}\" to map figure keys to limits, e.g. \"center_hz: {{ target: 137.5 MHz, tolerance: 0.3 MHz }}\"; found {StrictMap.Describe(value)}");
+                $"expected \"{Figures}\" to map figure keys to limits, e.g. \"{Core.Figures.FigureKeys.CentreFrequency.Word}: {{ target: 137.5 MHz, tolerance: 0.3 MHz }}\"; found {StrictMap.Describe(value)}");
             return null;
         }
 
@@ -30,7 +30,7 @@ internal sealed partial class PlanFileReader
             if (figure is null)
             {
                 var any = FigureCatalogue.FindAny(figureKey);
-                var choices = string.Join(", ", (trace is null ? FigureCatalogue.All : FigureCatalogue.For(trace.Quantity)).Select(f => f.Key).Distinct());
+                var choices = string.Join(", ", (trace is null ? FigureCatalogue.All : FigureCatalogue.For(trace.Quantity)).Select(f => f.Key.Word).Distinct());
                 _problems.Add(key, any is null || trace is null
                     ? $"unknown figure \"{figureKey}\"; expected one of {choices}"
                     : $"the figure \"{figureKey}\" is not computed for the {trace.Quantity} trace \"{trace.Name}\"; expected one of {choices}");
@@ -85,7 +85,7 @@ internal sealed partial class PlanFileReader
                 return null;
             }
 
-            return new FigureLimit(figure.Key, figure.Unit, target - tolerance, target + tolerance, target, key.Location);
+            return new FigureLimit(figure.Key, target - tolerance, target + tolerance, target, key.Location);
         }
 
         if (min is null && max is null)
@@ -100,7 +100,7 @@ internal sealed partial class PlanFileReader
             return null;
         }
 
-        return new FigureLimit(figure.Key, figure.Unit, min, max, null, key.Location);
+        return new FigureLimit(figure.Key, min, max, null, key.Location);
     }
 
     // A value in the figure's own unit; a tolerance on a level in dBm is a difference, in dB.
@@ -113,33 +113,30 @@ internal sealed partial class PlanFileReader
         }
 
         var raw = text.Value.Trim();
-        var unit = difference && figure.Unit == "dBm" ? "dB" : figure.Unit;
+        var unit = difference && figure.Unit == QuantityUnit.DecibelMilliwatt ? QuantityUnit.Decibel : figure.Unit;
         double? value = unit switch
         {
-            "Hz" => Frequency.Parse(raw) is { Success: true } f && raw.EndsWith("hz", StringComparison.OrdinalIgnoreCase) ? f.Value.Hertz : null,
-            "dB" => Ratio.Parse(raw) is { Success: true } r ? r.Value.Decibels : null,
-            "dBm" => Level.Parse(raw) is { Success: true } l ? l.Value.Dbm : null,
-            _ => double.TryParse(raw, NumberStyles.Float, CultureInfo.InvariantCulture, out var n) && double.IsFinite(n) ? n : null,
+            _ when unit == QuantityUnit.Hertz => Frequency.Parse(raw) is { Success: true } f && raw.EndsWith("hz", StringComparison.OrdinalIgnoreCase) ? f.Value.Hertz : null,
+            _ when unit == QuantityUnit.Decibel => Ratio.Parse(raw) is { Success: true } r ? r.Value.Decibels : null,
+            _ when unit == QuantityUnit.DecibelMilliwatt => Level.Parse(raw) is { Success: true } l ? l.Value.Dbm : null,
+            _ when unit == QuantityUnit.None => double.TryParse(raw, NumberStyles.Float, CultureInfo.InvariantCulture, out var n) && double.IsFinite(n) ? n : null,
+            _ => throw new InvalidOperationException($"No plan figure is in {unit.Symbol}."),
         };
         if (value is null)
         {
-            var example = unit switch
-            {
-                "Hz" => "a frequency with its unit, such as \"137.5 MHz\"",
-                "dB" => "a ratio in dB, such as \"4 dB\"",
-                "dBm" => "a level in dBm, such as \"-30 dBm\"",
-                _ => "a plain number without a unit, such as \"45\"",
-            };
+            var example = unit == QuantityUnit.Hertz ? "a frequency with its unit, such as \"137.5 MHz\""
+                : unit == QuantityUnit.Decibel ? "a ratio in dB, such as \"4 dB\""
+                : unit == QuantityUnit.DecibelMilliwatt ? "a level in dBm, such as \"-30 dBm\""
+                : "a plain number without a unit, such as \"45\"";
             _problems.Add(text, $"\"{raw}\" is not right for the {key} of \"{figure.Key}\"; expected {example}");
         }
 
         return value;
     }
 
-    private static string Show(double value, string unit) => unit switch
-    {
-        "Hz" => Frequency.FromHertz(value).ToString(),
-        "" => value.ToString("0.######", CultureInfo.InvariantCulture),
-        _ => $"{value.ToString("0.######", CultureInfo.InvariantCulture)} {unit}",
-    };
+    // The value as written (up to 9 significant digits, or 6 decimals of a dB), not the rounded text of a measured figure.
+    private static string Show(double value, QuantityUnit unit) =>
+        unit == QuantityUnit.Decibel ? Ratio.FromDecibels(value).ToString()
+        : unit == QuantityUnit.DecibelMilliwatt ? Level.FromDbm(value).ToString()
+        : QuantityFormat.Format(value, unit, 9);
 }

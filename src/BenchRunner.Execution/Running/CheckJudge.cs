@@ -1,4 +1,3 @@
-using System.Globalization;
 using BenchRunner.Core.Figures;
 using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;
@@ -15,10 +14,10 @@ internal static class CheckJudge
     {
         var evaluation = step.Mask.Evaluate(trace);
         var worst = evaluation.WorstMarginDb is { } w && evaluation.WorstMarginAt is { } at
-            ? $"worst margin {w.ToString("+0.00;-0.00", CultureInfo.InvariantCulture)} dB at {at}"
+            ? $"worst margin {QuantityFormat.Signed(w, QuantityUnit.Decibel)} at {at}"
             : "no point under the mask";
         var spans = evaluation.FailingSpans.Count == 0 ? "" : $"; fails {string.Join(", ", evaluation.FailingSpans.Select(s => $"{s.Start} to {s.Stop}"))}";
-        var result = new CheckResult(name, $"mask {step.Mask.Name} on {step.Trace}", evaluation.Passed, worst + spans, evaluation.WorstMarginDb, "dB");
+        var result = new CheckResult(name, $"mask {step.Mask.Name} on {step.Trace}", evaluation.Passed, worst + spans, evaluation.WorstMarginDb, QuantityUnit.Decibel.Symbol);
         return (result, evaluation.WorstMarginAt);
     }
 
@@ -26,21 +25,23 @@ internal static class CheckJudge
     public static CheckResult Figure(string traceName, FigureLimit limit, string step, IReadOnlyList<NamedFigure> figures)
     {
         var figure = figures.FirstOrDefault(f => f.Key == limit.Key);
-        var what = $"{limit.Key} of {traceName}";
+        var what = $"{limit.Key.Word} of {traceName}";
         var wanted = Describe(limit);
-        if (figure?.Value is not { } value)
+        if (figure?.Value is not { } quantity)
         {
-            return new CheckResult(step, what, false, $"not available ({figure?.Reason ?? "not computed"}); wanted {wanted}", null, limit.Unit);
+            return new CheckResult(step, what, false, $"not available ({figure?.Reason ?? "not computed"}); wanted {wanted}", null, limit.Unit.Symbol);
         }
+
+        var value = quantity.Value;
 
         var margins = new List<double>();
         if (limit.Min is { } lo) margins.Add(value - lo);
         if (limit.Max is { } hi) margins.Add(hi - value);
-        return new CheckResult(step, what, limit.Passes(value), $"{Format(value, limit.Unit)}; wanted {wanted}",
-            margins.Count == 0 ? null : margins.Min(), limit.Unit);
+        return new CheckResult(step, what, limit.Passes(value), $"{QuantityFormat.Format(quantity)}; wanted {wanted}",
+            margins.Count == 0 ? null : margins.Min(), limit.Unit.Symbol);
     }
 
-    /// <summary>The limit in words, e.g. <c>137.5 MHz ± 0.3 MHz</c> or <c>at most 4 dB</c>.</summary>
+    /// <summary>The limit in words, e.g. <c>137.5 MHz ± 300 kHz</c> or <c>at most 4 dB</c> (<see cref="QuantityFormat"/>).</summary>
     public static string Describe(FigureLimit limit) => (limit.Min, limit.Max, limit.Target) switch
     {
         ({ } lo, { } hi, { } t) => $"{Format(t, limit.Unit)} ± {Format((hi - lo) / 2, limit.Unit)}",
@@ -50,13 +51,5 @@ internal static class CheckJudge
         _ => "any value",
     };
 
-    /// <summary>A figure value in its unit for people.</summary>
-    public static string Format(double value, string unit) => unit switch
-    {
-        "Hz" => Math.Abs(value) >= 1e6 ? $"{(value / 1e6).ToString("0.####", CultureInfo.InvariantCulture)} MHz"
-            : Math.Abs(value) >= 1e3 ? $"{(value / 1e3).ToString("0.###", CultureInfo.InvariantCulture)} kHz"
-            : $"{value.ToString("0.#", CultureInfo.InvariantCulture)} Hz",
-        "" => value.ToString("0.###", CultureInfo.InvariantCulture),
-        _ => $"{value.ToString("0.###", CultureInfo.InvariantCulture)} {unit}",
-    };
+    private static string Format(double value, QuantityUnit unit) => QuantityFormat.Format(value, unit);
 }

@@ -13,11 +13,10 @@ namespace BenchRunner.Execution.Tuning;
 /// </summary>
 public sealed class TuningTargets
 {
-    /// <summary>The key under which the worst mask margin is shown and stored: <c>mask_margin_db</c>.</summary>
-    public const string MaskMarginKey = "mask_margin_db";
-
-    /// <summary>The figures always shown when the trace has them: centre, insertion loss, −3 dB bandwidth, loaded Q.</summary>
-    public static IReadOnlyList<string> StandardKeys { get; } = ["center_hz", "insertion_loss_db", "bandwidth_3db_hz", "loaded_q"];
+    /// <summary>The figures always shown when the trace has them: centre, insertion loss, −3 dB bandwidth, loaded Q.
+    /// The worst mask margin is shown as <see cref="FigureKeys.MaskMargin"/>.</summary>
+    public static IReadOnlyList<FigureKey> StandardKeys { get; } =
+        [FigureKeys.CentreFrequency, FigureKeys.InsertionLoss, FigureKeys.Bandwidth3Db, FigureKeys.LoadedQ];
 
     private TuningTargets(string? trace, MaskCheck? mask, IReadOnlyList<(string Trace, FigureLimit Limit)> limits)
     {
@@ -63,13 +62,13 @@ public sealed class TuningTargets
         var rows = new List<TuningFigure>();
         var before = (previous ?? []).ToDictionary(f => (f.Trace, f.Key), f => f.Value);
 
-        void Add(string traceName, string key, string label, double? value, string unit, FigureLimit? limit, bool? inside)
+        void Add(string traceName, FigureKey key, string label, double? value, FigureLimit? limit, bool? inside)
         {
             double? change = value is { } v && before.TryGetValue((traceName, key), out var old) && old is { } o ? v - o : null;
-            rows.Add(new TuningFigure(key, traceName, label, value, unit, change, limit, inside));
+            rows.Add(new TuningFigure(key, traceName, label, value, change, limit, inside));
         }
 
-        void AddFigure(string traceName, string key, FigureLimit? limit)
+        void AddFigure(string traceName, FigureKey key, FigureLimit? limit)
         {
             var figure = figuresByTrace.TryGetValue(traceName, out var list) ? list.FirstOrDefault(f => f.Key == key) : null;
             if (figure is null && limit is null)
@@ -77,8 +76,9 @@ public sealed class TuningTargets
                 return;
             }
 
-            bool? inside = limit is null ? null : figure?.Value is { } value && limit.Passes(value);
-            Add(traceName, key, figure?.Label ?? key, figure?.Value, figure?.Unit ?? limit!.Unit, limit, inside);
+            var value = figure?.Value?.Value;
+            bool? inside = limit is null ? null : value is { } v && limit.Passes(v);
+            Add(traceName, key, key.Label, value, limit, inside);
         }
 
         if (Trace is { } tuned)
@@ -90,8 +90,8 @@ public sealed class TuningTargets
 
             if (MaskStep is { } step)
             {
-                var limit = new FigureLimit(MaskMarginKey, "dB", 0, null, null, step.Location);
-                Add(tuned, MaskMarginKey, $"Worst margin to {step.Mask.Name}", mask?.WorstMarginDb, "dB", limit, mask?.Passed ?? false);
+                var limit = new FigureLimit(FigureKeys.MaskMargin, 0, null, null, step.Location);
+                Add(tuned, FigureKeys.MaskMargin, $"Worst margin to {step.Mask.Name}", mask?.WorstMarginDb, limit, mask?.Passed ?? false);
             }
         }
 

@@ -2,7 +2,10 @@ using System.Globalization;
 
 namespace BenchRunner.Reports.Formatting;
 
-/// <summary>Number and time formatting for reports: invariant culture, unit-bearing, short.</summary>
+/// <summary>
+/// Axis units, percentages, times and coordinates for reports, in the invariant culture. Measured
+/// values are formatted by Core's <c>QuantityFormat</c>, as everywhere else.
+/// </summary>
 public static class ReportFormat
 {
     private static readonly CultureInfo Invariant = CultureInfo.InvariantCulture;
@@ -23,41 +26,8 @@ public static class ReportFormat
         return m >= 1e9 ? (1e9, "GHz") : m >= 1e6 ? (1e6, "MHz") : m >= 1e3 ? (1e3, "kHz") : (1, "Hz");
     }
 
-    /// <summary>A value with its unit, e.g. <c>137.5123 MHz</c>, <c>-2.31 dB</c>, <c>1.45</c>.</summary>
-    public static string Value(double value, string unit)
-    {
-        var (divisor, shown) = DisplayUnit(value, unit);
-        var scaled = value / divisor;
-        var text = unit switch
-        {
-            "Hz" => scaled.ToString(divisor >= 1e6 ? "0.0000" : "0.###", Invariant),
-            "dB" or "dBm" => scaled.ToString("0.00", Invariant),
-            _ => Number(scaled),
-        };
-        return shown.Length == 0 ? text : $"{text} {shown}";
-    }
-
-    /// <summary>A spread (standard deviation) with its unit: like <see cref="Value"/>, with more digits for small hertz values.</summary>
-    public static string Spread(double value, string unit)
-    {
-        if (unit != "Hz")
-        {
-            return Value(value, unit);
-        }
-
-        var (divisor, shown) = DisplayUnit(value, unit);
-        return $"{(value / divisor).ToString("0.###", Invariant)} {shown}";
-    }
-
-    /// <summary>A plain number: up to three decimals, one above 100.</summary>
-    public static string Number(double value) => value.ToString(Math.Abs(value) >= 100 ? "0.0" : "0.###", Invariant);
-
     /// <summary>A fraction from 0 to 1 as a percentage with one decimal, e.g. <c>85.0 %</c>.</summary>
     public static string Percent(double fraction) => $"{(100 * fraction).ToString("0.0", Invariant)} %";
-
-    /// <summary>A margin with an explicit sign, e.g. <c>+1.20 dB</c>.</summary>
-    public static string Margin(double value, string? unit) =>
-        (value >= 0 ? "+" : "") + Value(value, unit ?? "");
 
     /// <summary>A time in UTC, to the second, e.g. <c>2026-12-02 05:13:04 UTC</c>.</summary>
     public static string Time(DateTimeOffset time) => time.UtcDateTime.ToString("yyyy-MM-dd HH:mm:ss", Invariant) + " UTC";

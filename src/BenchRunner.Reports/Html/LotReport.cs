@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Xml.Linq;
+using BenchRunner.Core.Quantities;
 using BenchRunner.Reports.Formatting;
 using BenchRunner.Reports.Lots;
 using BenchRunner.Reports.Svg;
@@ -100,12 +101,12 @@ public static class LotReport
             {
                 f.Limit.CheckName,
                 Num(Count(f.Values.Count)),
-                Num(f.Statistics is { } s ? ReportFormat.Value(s.Mean, f.Limit.Unit) : null),
-                Num(f.Statistics is { } sd ? ReportFormat.Spread(sd.StandardDeviation, f.Limit.Unit) : null),
-                Num(f.Statistics is { } lo ? ReportFormat.Value(lo.Minimum, f.Limit.Unit) : null),
-                Num(f.Statistics is { } hi ? ReportFormat.Value(hi.Maximum, f.Limit.Unit) : null),
-                Num(f.Limit.Min is { } lsl ? ReportFormat.Value(lsl, f.Limit.Unit) : null),
-                Num(f.Limit.Max is { } usl ? ReportFormat.Value(usl, f.Limit.Unit) : null),
+                Num(f.Statistics is { } s ? QuantityFormat.Format(s.Mean, f.Limit.Unit) : null),
+                Num(f.Statistics is { } sd ? QuantityFormat.Format(sd.StandardDeviation, f.Limit.Unit) : null),
+                Num(f.Statistics is { } lo ? QuantityFormat.Format(lo.Minimum, f.Limit.Unit) : null),
+                Num(f.Statistics is { } hi ? QuantityFormat.Format(hi.Maximum, f.Limit.Unit) : null),
+                Num(f.Limit.Min is { } lsl ? QuantityFormat.Format(lsl, f.Limit.Unit) : null),
+                Num(f.Limit.Max is { } usl ? QuantityFormat.Format(usl, f.Limit.Unit) : null),
                 Num(f.Capability.IsAvailable && f.Capability.Value.Cp is { } cp ? cp.ToString("0.00", CultureInfo.InvariantCulture) : null),
                 f.Capability.IsAvailable ? Num(f.Capability.Value.Cpk.ToString("0.00", CultureInfo.InvariantCulture)) : E("td", $"not available: {f.Capability.Reason}"),
             }));

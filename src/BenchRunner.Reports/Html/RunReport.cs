@@ -1,6 +1,7 @@
 using System.Xml.Linq;
 using BenchRunner.Core.Figures;
 using BenchRunner.Core.Masks;
+using BenchRunner.Core.Quantities;
 using BenchRunner.Execution.LimitRecords;
 using BenchRunner.Reports.Formatting;
 using BenchRunner.Reports.Svg;
@@ -54,7 +55,7 @@ public static class RunReport
             checks.Select(c => new object?[]
             {
                 c.Record.Name, Verdict(c.Record.Passed ? "pass" : "FAIL", c.Record.Passed), c.Record.Message,
-                c.Record.Margin is { } m ? E("td", Class("num"), ReportFormat.Margin(m, c.Record.MarginUnit)) : null,
+                c.Record.Margin is { } m ? E("td", Class("num"), QuantityFormat.Signed(m, c.Record.MarginUnit)) : null,
             }));
 
         int plot = 0;
@@ -140,8 +141,8 @@ public static class RunReport
         figures.Count == 0 ? E("p", "No figures.") : Table("figures", ["figure", "key", "value"],
             figures.Select(f => new object?[]
             {
-                f.Label, E("code", f.Key),
-                f.Value is { } v ? E("td", Class("num"), ReportFormat.Value(v, f.Unit)) : $"not available: {f.Reason}",
+                f.Label, E("code", f.Key.Word),
+                f.Value is { } v ? E("td", Class("num"), QuantityFormat.Format(v)) : $"not available: {f.Reason}",
             }));
 
     private static IEnumerable<XElement> FiguresOverTime(IReadOnlyList<StoredSweep> sweeps, PlanLimits? limits, string trace, string idPrefix)
@@ -159,11 +160,11 @@ public static class RunReport
             var points = sweeps
                 .Select(s => (Seconds: (s.Record.AcquiredUtc!.Value - start).TotalSeconds, Figure: s.Record.Figures.FirstOrDefault(f => f.Key == key)))
                 .Where(p => p.Figure?.Value is not null)
-                .Select(p => (p.Seconds, p.Figure!.Value!.Value))
+                .Select(p => (p.Seconds, p.Figure!.Value!.Value.Value))
                 .ToList();
             var figure = sweeps.SelectMany(s => s.Record.Figures).First(f => f.Key == key);
-            var limit = limits?.Figures.FirstOrDefault(l => l.Trace == trace && l.Key == key);
-            if (FigureTimePlot.Create($"{idPrefix}-{++n}", $"{figure.Label} ({key})", figure.Unit, points, limit?.Min, limit?.Max) is { } svg)
+            var limit = limits?.Figures.FirstOrDefault(l => l.Trace == trace && l.Key == key.Word);
+            if (FigureTimePlot.Create($"{idPrefix}-{++n}", $"{figure.Label} ({key.Word})", figure.Unit.Symbol, points, limit?.Min, limit?.Max) is { } svg)
             {
                 yield return svg;
             }

@@ -102,9 +102,9 @@ public sealed class LotSummary
             {
                 foreach (var figure in sweep.Record.Figures)
                 {
-                    if (figure.Value is { } v && values.TryGetValue((sweep.Record.TraceName!, figure.Key), out var list))
+                    if (figure.Value is { } v && values.TryGetValue((sweep.Record.TraceName!, figure.Key.Word), out var list))
                     {
-                        list.Add((board.Serial, v));
+                        list.Add((board.Serial, v.Value));
                     }
                 }
             }

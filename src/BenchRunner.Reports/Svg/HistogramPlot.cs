@@ -1,4 +1,5 @@
 using System.Xml.Linq;
+using BenchRunner.Core.Quantities;
 using BenchRunner.Reports.Formatting;
 using BenchRunner.Reports.Lots;
 using static BenchRunner.Reports.Svg.SvgNames;
@@ -60,7 +61,7 @@ public static class HistogramPlot
             var y = frame.MapY(counts[i]);
             frame.Content.Add(Element("rect", Attr("x", from), Attr("y", y), Attr("width", Math.Max(to - from - 1, 1.0)),
                 Attr("height", frame.MapY(0) - y), Attr("class", "bin"),
-                Element("title", $"{counts[i]} board{(counts[i] == 1 ? "" : "s")} from {ReportFormat.Value((low + i * width) * divisor, limit.Unit)} to {ReportFormat.Value((low + (i + 1) * width) * divisor, limit.Unit)}")));
+                Element("title", $"{counts[i]} board{(counts[i] == 1 ? "" : "s")} from {QuantityFormat.Format((low + i * width) * divisor, limit.Unit)} to {QuantityFormat.Format((low + (i + 1) * width) * divisor, limit.Unit)}")));
         }
 
         if (limit.Min is { } lsl)

@@ -1,5 +1,6 @@
 using System.Xml.Linq;
 using BenchRunner.Core.Masks;
+using BenchRunner.Core.Quantities;
 using BenchRunner.Core.Traces;
 using BenchRunner.Reports.Formatting;
 using static BenchRunner.Reports.Svg.SvgNames;
@@ -41,7 +42,7 @@ public static class TracePlot
                 var to = frame.MapX((span.Stop.Hertz + spacing / 2) / divisor);
                 frame.Content.Add(Element("rect", Attr("x", from), Attr("y", frame.AreaTop), Attr("width", Math.Max(to - from, 1.0)),
                     Attr("height", frame.AreaBottom - frame.AreaTop), Attr("class", "fail-span"),
-                    Element("title", $"fails the {(span.Side == LimitSide.Upper ? "upper" : "lower")} limit from {ReportFormat.Value(span.Start.Hertz, "Hz")} to {ReportFormat.Value(span.Stop.Hertz, "Hz")}, worst {ReportFormat.Margin(span.WorstMarginDb, "dB")}")));
+                    Element("title", $"fails the {(span.Side == LimitSide.Upper ? "upper" : "lower")} limit from {QuantityFormat.Format(span.Start.Hertz, QuantityUnit.Hertz)} to {QuantityFormat.Format(span.Stop.Hertz, QuantityUnit.Hertz)}, worst {QuantityFormat.Signed(span.WorstMarginDb, QuantityUnit.Decibel)}")));
             }
 
             AddLimit(frame, hertz, evaluation.UpperLimitsDb, divisor, "limit upper");

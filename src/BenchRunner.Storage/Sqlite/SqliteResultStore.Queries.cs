@@ -97,7 +97,7 @@ public sealed partial class SqliteResultStore
                 row.Integer("sweep_id"),
                 (int)row.Integer("seq"),
                 row.Text("step_name"),
-                new NamedFigure(row.Text("key"), row.Text("label"), row.RealOrNull("value"), row.Text("unit"), row.TextOrNull("reason"))));
+                FigureColumns.ToFigure(row.Text("key"), row.Text("label"), row.RealOrNull("value"), row.Text("unit"), row.TextOrNull("reason"))));
 
     /// <summary>The checks of run <paramref name="runId"/>, in the order they were added.</summary>
     public IReadOnlyList<StoredCheck> GetChecks(long runId) =>

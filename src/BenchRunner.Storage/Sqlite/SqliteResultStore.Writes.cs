@@ -91,7 +91,7 @@ public sealed partial class SqliteResultStore
     /// returning. The sweep gets the run's next sequence number (1, 2, 3...).
     /// </summary>
     /// <returns>The sweep's id.</returns>
-    /// <exception cref="ArgumentException">No such run, an empty step name, undefined flags, settings that are not valid JSON, or a figure that is empty, repeated, not finite, or has both or neither of value and reason.</exception>
+    /// <exception cref="ArgumentException">No such run, an empty step name, undefined flags, settings that are not valid JSON, or a figure key given twice (a figure is valid by construction).</exception>
     /// <exception cref="InvalidOperationException">The run has finished.</exception>
     /// <exception cref="ResultStoreException">The file refused the write (busy beyond <see cref="BusyTimeout"/>, full, damaged).</exception>
     public long AddSweep(long runId, SweepRecord sweep)
@@ -215,19 +215,12 @@ public sealed partial class SqliteResultStore
         var keys = new HashSet<string>(StringComparer.Ordinal);
         foreach (var figure in sweep.Figures)
         {
+            // A NamedFigure is valid by construction (a value in its key's unit, or a reason); only
+            // a repeated key is left to refuse.
             ArgumentNullException.ThrowIfNull(figure, nameof(sweep.Figures));
-            Validate.Required(figure.Key, "figure key");
-            ArgumentNullException.ThrowIfNull(figure.Label);
-            ArgumentNullException.ThrowIfNull(figure.Unit);
-            Validate.Finite(figure.Value, $"figure {figure.Key}");
-            if (!keys.Add(figure.Key))
+            if (!keys.Add(figure.Key.Word))
             {
-                throw new ArgumentException($"Figure {figure.Key} is given twice.", nameof(sweep));
-            }
-
-            if ((figure.Value is null) == (figure.Reason is null))
-            {
-                throw new ArgumentException($"Figure {figure.Key} needs either a value or the reason it has none, not both or neither.", nameof(sweep));
+                throw new ArgumentException($"Figure {figure.Key.Word} is given twice.", nameof(sweep));
             }
         }
     }
@@ -251,11 +244,12 @@ public sealed partial class SqliteResultStore
         var reason = command.Parameters.Add("$reason", SqliteType.Text);
         foreach (var figure in sweep.Figures)
         {
-            key.Value = figure.Key;
-            label.Value = figure.Label;
-            value.Value = figure.Value is { } v ? v : DBNull.Value;
-            unit.Value = figure.Unit;
-            reason.Value = (object?)figure.Reason ?? DBNull.Value;
+            var columns = FigureColumns.From(figure);
+            key.Value = columns.Key;
+            label.Value = columns.Label;
+            value.Value = columns.Value is { } v ? v : DBNull.Value;
+            unit.Value = columns.Unit;
+            reason.Value = (object?)columns.Reason ?? DBNull.Value;
             command.ExecuteNonQuery();
         }
     }

@@ -37,7 +37,7 @@ public sealed class BatchCommandTests
 
             var figures = FigureSummary.ForFilter(s21);
             failed.AddRange(figureCheck.Limits
-                .Where(l => figures.First(f => f.Key == l.Key).Value is not { } v || !l.Passes(v))
+                .Where(l => figures.First(f => f.Key == l.Key).Value is not { } v || !l.Passes(v.Value))
                 .Select(l => $"{l.Key} of {figureCheck.Trace}"));
             expected[board.Serial] = failed;
         }

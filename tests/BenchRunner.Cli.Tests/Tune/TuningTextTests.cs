@@ -1,5 +1,6 @@
 using BenchRunner.Cli.Tune;
 using BenchRunner.Core.Diagnostics;
+using BenchRunner.Core.Figures;
 using BenchRunner.Execution.Plans;
 using BenchRunner.Execution.Tuning;
 
@@ -9,27 +10,43 @@ public sealed class TuningTextTests
 {
     private static readonly SourceLocation Here = new("plan.yaml", 1, 1);
 
-    private static TuningFigure Row(string key, double? value, string unit, double? change, FigureLimit? limit = null, bool? inside = null) =>
-        new(key, "passband", key, value, unit, change, limit, inside);
+    private static TuningFigure Row(FigureKey key, double? value, double? change, FigureLimit? limit = null, bool? inside = null) =>
+        new(key, "passband", key.Label, value, change, limit, inside);
 
     [Theory]
     [InlineData(31_200.0, "+31.2 kHz")]
     [InlineData(-2_000_000.0, "-2 MHz")]
     [InlineData(0.01, "±0 Hz")]
     public void Change_Frequency_HasItsSignAndAPrefix(double change, string expected) =>
-        Assert.Equal(expected, TuningText.Change(Row("center_hz", 137.5e6, "Hz", change)));
+        Assert.Equal(expected, TuningText.Change(Row(FigureKeys.CentreFrequency, 137.5e6, change)));
 
     [Fact]
     public void Change_TooSmallToShow_HasNoDirection() =>
-        Assert.Equal("±0.00 dB", TuningText.Change(Row("insertion_loss_db", 2.5, "dB", -0.001)));
+        Assert.Equal("±0 dB", TuningText.Change(Row(FigureKeys.InsertionLoss, 2.5, -0.001)));
+
+    [Fact]
+    public void Change_FloatingPointNoiseOnAFrequency_IsBelowTheValuesResolution() =>
+        Assert.Equal("±0 Hz", TuningText.Change(Row(FigureKeys.CentreFrequency, 137.5e6, 1e-7)));
+
+    [Fact]
+    public void Change_LevelInDbm_IsARatioInDb() =>
+        Assert.Equal("+0.25 dB", TuningText.Change(Row(FigureKeys.NoiseFloor, -110, 0.25)));
+
+    [Fact]
+    public void Value_MaskMargin_HasItsSign()
+    {
+        Assert.Equal("+0.6 dB", TuningText.Value(Row(FigureKeys.MaskMargin, 0.6, null)));
+        Assert.Equal("137.5642 MHz", TuningText.Value(Row(FigureKeys.CentreFrequency, 137.56423e6, null)));
+        Assert.Equal("-", TuningText.Value(Row(FigureKeys.LoadedQ, null, null)));
+    }
 
     [Fact]
     public void Target_TargetWithTolerance_ReadsAsPlusMinus() =>
-        Assert.Equal("137.5 MHz ± 300 kHz", TuningText.Target(Row("center_hz", 137.5e6, "Hz", null, new FigureLimit("center_hz", "Hz", 137.2e6, 137.8e6, 137.5e6, Here))));
+        Assert.Equal("137.5 MHz ± 300 kHz", TuningText.Target(Row(FigureKeys.CentreFrequency, 137.5e6, null, new FigureLimit(FigureKeys.CentreFrequency, 137.2e6, 137.8e6, 137.5e6, Here))));
 
     [Fact]
     public void Target_MaskMargin_ReadsAsAtLeastZero() =>
-        Assert.Equal("at least +0.00 dB", TuningText.Target(Row(TuningTargets.MaskMarginKey, 0.4, "dB", null, new FigureLimit(TuningTargets.MaskMarginKey, "dB", 0, null, null, Here))));
+        Assert.Equal("at least 0 dB", TuningText.Target(Row(FigureKeys.MaskMargin, 0.4, null, new FigureLimit(FigureKeys.MaskMargin, 0, null, null, Here))));
 
     [Fact]
     public void Settle_StreakShort_SaysWhatIsStillNeeded()

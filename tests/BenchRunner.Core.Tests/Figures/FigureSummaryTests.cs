@@ -16,7 +16,7 @@ public class FigureSummaryTests
     {
         var figures = FigureSummary.ForFilter(TestTraces.SeriesResonator(9.5e6, 10.5e6, 2001));
 
-        Assert.Equal([.. FilterKeys, "unloaded_q"], figures.Select(f => f.Key));
+        Assert.Equal([.. FilterKeys, "unloaded_q"], figures.Select(f => f.Key.Word));
     }
 
     [Fact]
@@ -26,8 +26,8 @@ public class FigureSummaryTests
 
         var figures = FigureSummary.ForFilter(s11);
 
-        Assert.Equal(FilterKeys, figures.Select(f => f.Key));
-        var loss = figures.Single(f => f.Key == "insertion_loss_db");
+        Assert.Equal(FilterKeys, figures.Select(f => f.Key.Word));
+        var loss = figures.Single(f => f.Key == FigureKeys.InsertionLoss);
         Assert.Null(loss.Value);
         Assert.Contains("transmission", loss.Reason);
     }
@@ -39,21 +39,21 @@ public class FigureSummaryTests
         // -60 dB at 80 and 120 MHz; QL = 100/2 = 50 (calc).
         var trace = TestTraces.S21Mhz([79, 100, 121], [-63 - 1.5, -1.5, -63 - 1.5]);
 
-        var figures = FigureSummary.ForFilter(trace).ToDictionary(f => f.Key);
+        var figures = FigureSummary.ForFilter(trace).ToDictionary(f => f.Key.Word);
 
-        Assert.Equal(100e6, figures["peak_hz"].Value!.Value, 1e-3);
-        Assert.Equal(-1.5, figures["peak_db"].Value!.Value, 1e-9);
-        Assert.Equal(2e6, figures["bandwidth_3db_hz"].Value!.Value, 1e-3);
-        Assert.Equal(100e6, figures["center_hz"].Value!.Value, 1e-3);
-        Assert.Equal(50, figures["loaded_q"].Value!.Value, 1e-9);
-        Assert.Equal(1.5, figures["insertion_loss_db"].Value!.Value, 1e-9);
-        Assert.Equal(99e6, figures["lower_3db_hz"].Value!.Value, 1e-3);
-        Assert.Equal(101e6, figures["upper_3db_hz"].Value!.Value, 1e-3);
-        Assert.Equal(2e6 / 3, figures["bandwidth_1db_hz"].Value!.Value, 1e-3);
-        Assert.Equal(20, figures["shape_factor_60_3"].Value!.Value, 1e-9);
-        Assert.Equal("Hz", figures["peak_hz"].Unit);
-        Assert.Equal("dB", figures["peak_db"].Unit);
-        Assert.Equal("", figures["loaded_q"].Unit);
+        Assert.Equal(100e6, figures["peak_hz"].Value!.Value.Value, 1e-3);
+        Assert.Equal(-1.5, figures["peak_db"].Value!.Value.Value, 1e-9);
+        Assert.Equal(2e6, figures["bandwidth_3db_hz"].Value!.Value.Value, 1e-3);
+        Assert.Equal(100e6, figures["center_hz"].Value!.Value.Value, 1e-3);
+        Assert.Equal(50, figures["loaded_q"].Value!.Value.Value, 1e-9);
+        Assert.Equal(1.5, figures["insertion_loss_db"].Value!.Value.Value, 1e-9);
+        Assert.Equal(99e6, figures["lower_3db_hz"].Value!.Value.Value, 1e-3);
+        Assert.Equal(101e6, figures["upper_3db_hz"].Value!.Value.Value, 1e-3);
+        Assert.Equal(2e6 / 3, figures["bandwidth_1db_hz"].Value!.Value.Value, 1e-3);
+        Assert.Equal(20, figures["shape_factor_60_3"].Value!.Value.Value, 1e-9);
+        Assert.Equal("Hz", figures["peak_hz"].Unit.Symbol);
+        Assert.Equal("dB", figures["peak_db"].Unit.Symbol);
+        Assert.Equal("", figures["loaded_q"].Unit.Symbol);
         Assert.All(figures.Values, f => Assert.Null(f.Reason));
     }
 
@@ -62,7 +62,7 @@ public class FigureSummaryTests
     {
         var trace = TestTraces.S21Mhz([136, 137, 138], [-10, -5, -1]);
 
-        var figures = FigureSummary.ForFilter(trace).ToDictionary(f => f.Key);
+        var figures = FigureSummary.ForFilter(trace).ToDictionary(f => f.Key.Word);
 
         foreach (var key in new[] { "bandwidth_3db_hz", "center_hz", "loaded_q", "lower_3db_hz", "upper_3db_hz", "unloaded_q" })
         {
@@ -70,7 +70,7 @@ public class FigureSummaryTests
             Assert.False(string.IsNullOrWhiteSpace(figures[key].Reason), key);
         }
 
-        Assert.Equal(138e6, figures["peak_hz"].Value);
+        Assert.Equal(138e6, figures["peak_hz"].Value?.Value);
     }
 
     [Fact]
@@ -82,10 +82,10 @@ public class FigureSummaryTests
 
         Assert.Equal(
             ["peak_hz", "peak_dbm", "noise_floor_dbm", "occupied_bandwidth_hz", "occupied_lower_hz", "occupied_upper_hz"],
-            figures.Select(f => f.Key));
-        var byKey = figures.ToDictionary(f => f.Key);
-        Assert.Equal(PowerFigures.NoiseFloor(spectrum).Value.Dbm, byKey["noise_floor_dbm"].Value);
-        Assert.Equal(PowerFigures.OccupiedBandwidth(spectrum).Value.Width.Hertz, byKey["occupied_bandwidth_hz"].Value);
-        Assert.Equal("dBm", byKey["peak_dbm"].Unit);
+            figures.Select(f => f.Key.Word));
+        var byKey = figures.ToDictionary(f => f.Key.Word);
+        Assert.Equal(PowerFigures.NoiseFloor(spectrum).Value.Dbm, byKey["noise_floor_dbm"].Value?.Value);
+        Assert.Equal(PowerFigures.OccupiedBandwidth(spectrum).Value.Width.Hertz, byKey["occupied_bandwidth_hz"].Value?.Value);
+        Assert.Equal("dBm", byKey["peak_dbm"].Unit.Symbol);
     }
 }

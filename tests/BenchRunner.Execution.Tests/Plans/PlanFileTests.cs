@@ -1,4 +1,5 @@
 using BenchRunner.Core.Diagnostics;
+using BenchRunner.Core.Figures;
 using BenchRunner.Core.Traces;
 using BenchRunner.Execution.Plans;
 
@@ -26,10 +27,10 @@ public sealed class PlanFileTests
         Assert.Equal([TraceQuantity.S21, TraceQuantity.S11], sweep.Traces.Select(t => t.Quantity));
         Assert.Equal("psf-137-passband", Assert.IsType<MaskCheck>(plan.Steps[3]).Mask.Name);
         var figures = Assert.IsType<FigureCheck>(plan.Steps[4]);
-        var centre = figures.Limits.Single(l => l.Key == "center_hz");
+        var centre = figures.Limits.Single(l => l.Key == FigureKeys.CentreFrequency);
         Assert.Equal(137.2e6, centre.Min!.Value, 1e-3);
         Assert.Equal(137.8e6, centre.Max!.Value, 1e-3);
-        Assert.Equal(4, figures.Limits.Single(l => l.Key == "insertion_loss_db").Max);
+        Assert.Equal(4, figures.Limits.Single(l => l.Key == FigureKeys.InsertionLoss).Max);
     }
 
     [Fact]

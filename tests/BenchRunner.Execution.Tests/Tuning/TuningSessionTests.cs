@@ -81,7 +81,7 @@ public sealed class TuningSessionTests
             var network = Preselector137.BuildNetwork(Preselector137.NominalParts, script.At(Step * (k - 1)));
             var trace = new ComplexTrace(axis, TraceQuantity.S21, axis.Hertz.Select(hz => network.Evaluate(hz, 50).S21));
             var figures = FigureSummary.ForFilter(trace);
-            bool figuresInside = limits.All(l => figures.Single(f => f.Key == l.Key).Value is { } v && l.Passes(v));
+            bool figuresInside = limits.All(l => figures.Single(f => f.Key == l.Key).Value is { } v && l.Passes(v.Value));
             inside.Add(figuresInside && mask.Evaluate(trace).Passed);
         }
 
@@ -163,8 +163,8 @@ public sealed class TuningSessionTests
         Assert.Equal(Enumerable.Range(1, 7), stored.Select(s => s.Sequence));
         // Each sweep carries the time it was taken (1 s apart on the fake clock) and its own figures.
         Assert.Equal(Enumerable.Range(0, 7).Select(i => t0.AddSeconds(i)), stored.Select(s => s.Record.AcquiredUtc!.Value));
-        var centres = store.GetFigures(run.Id).Where(f => f.Figure.Key == "center_hz").Select(f => f.Figure.Value).ToList();
-        var shown = observer.Passes.Select(p => p.Figures.Single(f => f.Key == "center_hz").Value).ToList();
+        var centres = store.GetFigures(run.Id).Where(f => f.Figure.Key == FigureKeys.CentreFrequency).Select(f => f.Figure.Value?.Value).ToList();
+        var shown = observer.Passes.Select(p => p.Figures.Single(f => f.Key == FigureKeys.CentreFrequency).Value).ToList();
         Assert.Equal(shown, centres);
         // Mask and three figure checks per sweep, each tied to its sweep.
         var checks = store.GetChecks(run.Id);
@@ -204,14 +204,14 @@ public sealed class TuningSessionTests
 
         var first = observer.Passes[0].Figures;
         var second = observer.Passes[1].Figures;
-        Assert.Equal(["center_hz", "insertion_loss_db", "bandwidth_3db_hz", "loaded_q", TuningTargets.MaskMarginKey], second.Select(f => f.Key));
+        Assert.Equal(["center_hz", "insertion_loss_db", "bandwidth_3db_hz", "loaded_q", "mask_margin_db"], second.Select(f => f.Key.Word));
         Assert.All(first, f => Assert.Null(f.Change));
-        var centre = second.Single(f => f.Key == "center_hz");
-        Assert.Equal(centre.Value - first.Single(f => f.Key == "center_hz").Value, centre.Change);
+        var centre = second.Single(f => f.Key == FigureKeys.CentreFrequency);
+        Assert.Equal(centre.Value - first.Single(f => f.Key == FigureKeys.CentreFrequency).Value, centre.Change);
         Assert.Equal(137.5e6, centre.Limit!.Target);
         // At the start the detuned board (middle trimmer 0.77 pF low) is centred well above 137.5 MHz.
-        Assert.False(first.Single(f => f.Key == "center_hz").Inside);
-        Assert.Null(first.Single(f => f.Key == "loaded_q").Limit);
+        Assert.False(first.Single(f => f.Key == FigureKeys.CentreFrequency).Inside);
+        Assert.Null(first.Single(f => f.Key == FigureKeys.LoadedQ).Limit);
         Assert.NotNull(observer.Passes[0].Mask);
         Assert.Equal(401, observer.Passes[0].Trace!.Count);
     }

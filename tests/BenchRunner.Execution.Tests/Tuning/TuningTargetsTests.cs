@@ -26,7 +26,8 @@ public sealed class TuningTargetsTests
                 peak_db: { max: -10 dB }
         """, "two-traces.yaml", RepositoryFiles.PathOf("docs/examples/plans"));
 
-    private static NamedFigure Figure(string key, double? value, string unit = "") => new(key, key, value, unit, value is null ? "not found" : null);
+    private static NamedFigure Figure(string word, double? value) =>
+        value is { } v ? NamedFigure.Of(FigureKeys.Find(word)!, v) : NamedFigure.Unavailable(FigureKeys.Find(word)!, "not found");
 
     [Fact]
     public void From_PlanWithFigureChecks_TunesTheFirstCheckedTraceAndListsEveryLimit()
@@ -35,7 +36,7 @@ public sealed class TuningTargetsTests
 
         Assert.Equal("passband", targets.Trace);
         Assert.Null(targets.MaskStep);
-        Assert.Equal([("passband", "loaded_q"), ("passband", "peak_db"), ("match", "peak_db")], targets.Limits.Select(l => (l.Trace, l.Limit.Key)));
+        Assert.Equal([("passband", "loaded_q"), ("passband", "peak_db"), ("match", "peak_db")], targets.Limits.Select(l => (l.Trace, l.Limit.Key.Word)));
     }
 
     [Fact]
@@ -44,20 +45,20 @@ public sealed class TuningTargetsTests
         var targets = TuningTargets.From(Plan());
         var first = new Dictionary<string, IReadOnlyList<NamedFigure>>
         {
-            ["passband"] = [Figure("center_hz", 137.4e6, "Hz"), Figure("loaded_q", 38), Figure("peak_db", -2.5, "dB")],
-            ["match"] = [Figure("peak_db", -12, "dB")],
+            ["passband"] = [Figure("center_hz", 137.4e6), Figure("loaded_q", 38), Figure("peak_db", -2.5)],
+            ["match"] = [Figure("peak_db", -12)],
         };
         var second = new Dictionary<string, IReadOnlyList<NamedFigure>>
         {
-            ["passband"] = [Figure("center_hz", 137.45e6, "Hz"), Figure("loaded_q", 41), Figure("peak_db", null, "dB")],
-            ["match"] = [Figure("peak_db", -9, "dB")],
+            ["passband"] = [Figure("center_hz", 137.45e6), Figure("loaded_q", 41), Figure("peak_db", null)],
+            ["match"] = [Figure("peak_db", -9)],
         };
 
         var before = targets.Figures(first, mask: null, previous: null);
         var after = targets.Figures(second, mask: null, previous: before);
 
         // insertion_loss_db and bandwidth_3db_hz are absent and have no limit: not shown.
-        Assert.Equal([("passband", "center_hz"), ("passband", "loaded_q"), ("passband", "peak_db"), ("match", "peak_db")], after.Select(f => (f.Trace, f.Key)));
+        Assert.Equal([("passband", "center_hz"), ("passband", "loaded_q"), ("passband", "peak_db"), ("match", "peak_db")], after.Select(f => (f.Trace, f.Key.Word)));
         Assert.Equal(0.05e6, after[0].Change!.Value, 1e-3);
         Assert.Null(after[0].Inside);
         Assert.False(before[1].Inside);

@@ -116,7 +116,7 @@ public sealed class LotStore : IDisposable
     }
 
     /// <summary>Figures with only a centre frequency of <paramref name="hertz"/>.</summary>
-    public static IReadOnlyList<NamedFigure> Centre(double hertz) => [new NamedFigure("center_hz", "centre frequency", hertz, "Hz", null)];
+    public static IReadOnlyList<NamedFigure> Centre(double hertz) => [NamedFigure.Of(FigureKeys.CentreFrequency, hertz)];
 
     public void Dispose()
     {

@@ -58,7 +58,7 @@ public sealed class ValiditySchemaTests : IDisposable
         var runId = store.StartRun(Samples.Run());
         var sweep = new SweepRecord("output sweep", Samples.Spectrum())
         {
-            Figures = [new BenchRunner.Core.Figures.NamedFigure("peak_dbm", "peak level", -20, "dBm", null)],
+            Figures = [BenchRunner.Core.Figures.NamedFigure.Of(BenchRunner.Core.Figures.FigureKeys.PeakPower, -20)],
             Compensation = "compensated: probe 4.7 kOhm into 50 Ohm (39.554 dB)",
             Flags = SweepFlags.Overloaded,
         };
