@@ -30,7 +30,7 @@ public sealed class RunRecorderTests
             BenchName = "virtual", DutSerial = "PSF-24-0001", Lot = "PSF-24-L07", LimitsJson = "{\"limits\":[]}",
         };
         var trace = Samples.PassbandS21();
-        var figures = new[] { new NamedFigure("center_hz", "Centre", 137.5e6, "Hz", null) };
+        var figures = new[] { NamedFigure.Of(FigureKeys.CentreFrequency, 137.5e6) };
 
         await Feed(recorder,
             new RunStarted(T0, header),
